@@ -1,0 +1,3 @@
+// The whole schema, split by area. drizzle.config.ts and the client read it from here.
+export * from "./users";
+export * from "./club";
