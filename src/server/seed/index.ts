@@ -1,0 +1,20 @@
+// The demo: an invented club with its people, sites, antenna days, gear and build sessions.
+// Idempotent: each area seeds only what is not there yet. It refuses to touch a database
+// that holds real (non-demo) accounts.
+import { sql } from "drizzle-orm";
+import { hashPassword } from "@/server/services/accounts";
+import { db } from "@/server/db";
+import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
+
+export async function seedDemo(): Promise<void> {
+  const realAccounts = await db().execute<{ n: number }>(
+    sql`select count(*)::int as n from users where email not like ${"%@" + demoEmailDomain}`,
+  );
+  if (realAccounts.rows[0].n > 0) {
+    throw new Error("This database has accounts that are not demo accounts; the demo seed will not touch it.");
+  }
+  const passwordHash = await hashPassword(demoPassword);
+  await db().transaction(async (tx) => {
+    await seedClubAndPeople(tx, passwordHash);
+  });
+}
