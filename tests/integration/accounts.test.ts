@@ -6,6 +6,7 @@ import { PublicError } from "@/server/errors";
 import {
   acceptInvitation,
   changeMember,
+  createClub,
   inviteMember,
   joinWithCode,
   listMembers,
@@ -116,6 +117,20 @@ describe("signing in", () => {
     );
     const limited = results.filter((result) => result.status === "rejected" && (result.reason as PublicError).code === "rate-limited");
     expect(limited).toHaveLength(attempts - signInLimits.perEmail.limit);
+  });
+});
+
+describe("setting up a new club", () => {
+  it("refuses a second club in the same database and adds nobody", async () => {
+    const email = uniqueEmail("second-club");
+    const error = await publicErrorOf(
+      createClub({
+        club: { clubName: "Another club", ituRegion: 2, timeZone: "America/Denver", defaultUnits: "imperial", joinCode: "ANOTHER-CODE" },
+        coordinator: { name: "Second Coordinator", email, password: testPassword },
+      }),
+    );
+    expect(error.field).toBe("club");
+    await expect(verifyCredentials({ email, password: testPassword, clientAddress: "198.51.100.9" })).rejects.toThrow(/No Guyline account/);
   });
 });
 

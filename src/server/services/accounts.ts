@@ -227,6 +227,23 @@ export async function changePassword(actor: Actor, input: { currentPassword: str
   await db().update(users).set({ passwordHash: await hashPassword(input.newPassword) }).where(eq(users.id, actor.id));
 }
 
+/** First run of a new deployment: the club's settings and its first coordinator, together. */
+export async function createClub(input: {
+  club: Omit<typeof clubSettings.$inferInsert, "id" | "updatedAt">;
+  coordinator: { name: string; email: string; password: string };
+}): Promise<MemberDto> {
+  const passwordHash = await hashPassword(input.coordinator.password);
+  return db().transaction(async (tx) => {
+    const [created] = await tx.insert(clubSettings).values({ ...input.club, id: 1 }).onConflictDoNothing().returning();
+    if (!created) throw badInput("club", "This database already has a club. Sign in as one of its coordinators instead.");
+    const [row] = await tx
+      .insert(users)
+      .values({ name: input.coordinator.name, email: input.coordinator.email, passwordHash, role: "coordinator", isMentor: true, confirmedAt: new Date() })
+      .returning();
+    return toMemberDto(row);
+  });
+}
+
 export async function getClubSettings() {
   const settings = await db().query.clubSettings.findFirst();
   if (!settings) throw new Error("The club has no settings yet: run the seed or the first-run set-up.");
