@@ -63,7 +63,9 @@ export interface SwrBandwidth {
 export interface WireCurrent {
   wire: number;
   label: string;
-  /** Distance from the wire's start and RMS current at the transmitter's power, at the centre frequency. */
+  from: Vec3;
+  to: Vec3;
+  /** Distance from the wire's `from` end and RMS current at the transmitter's power, at the centre frequency. */
   points: { distanceM: number; rmsA: number }[];
 }
 
@@ -220,6 +222,8 @@ function wireCurrents(structure: Structure, solution: Solution, wireLabels: stri
   return structure.wires.map((w, index) => ({
     wire: index,
     label: wireLabels[index],
+    from: w.from,
+    to: w.to,
     points: solution.segments
       .filter((segment) => segment.wire === index)
       .map((segment) => {
