@@ -130,12 +130,16 @@ function engineAnswer(
   const prepared = prepareStructure(model.build(built).structure, maxMHz);
   const modelMHz = targets.map((target) => resonantFrequency(prepared, model.tuning, target));
   if (modelMHz.some((mhz) => mhz === null)) return { modelMHz, lengths: null };
+  const ratios = model.elements.map((_, k) => (modelMHz[k] as number) / measured[k]);
+  const tuning = model.tuning;
   const shifted: FamilyModel = {
     ...model,
-    elements: model.elements.map((element, k) => ({
-      ...element,
-      targetMHz: (element.targetMHz * (modelMHz[k] as number)) / measured[k],
-    })),
+    elements: model.elements.map((element, k) => ({ ...element, targetMHz: element.targetMHz * ratios[k] })),
+    // A best-match search range moves with its (single) target.
+    tuning:
+      tuning.kind === "best-match"
+        ? { ...tuning, lengthRangeM: [tuning.lengthRangeM[0] / ratios[0], tuning.lengthRangeM[1] / ratios[0]] }
+        : tuning,
   };
   const tuned = tuneLengths(shifted, built, maxMHz);
   return { modelMHz, lengths: tuned.converged ? tuned.lengths : null };
