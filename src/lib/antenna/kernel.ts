@@ -224,7 +224,6 @@ export function react(
   const ux = geometry.dir[3 * t];
   const uy = geometry.dir[3 * t + 1];
   const uz = geometry.dir[3 * t + 2];
-  const dTest = geometry.length[t];
   const sinTest = lengthPhases[2 * t];
   const cosTest = lengthPhases[2 * t + 1];
 
@@ -245,6 +244,7 @@ export function react(
   const py = withSecond ? second[1] : 0;
   const pz = withSecond ? second[2] : 0;
   const cosP = tx * px + ty * py + tz * pz;
+  const radial = withSecond || Math.abs(cosPsi) < 1 - 1e-12;
 
   let bbR = 0, bbI = 0, baR = 0, baI = 0, abR = 0, abI = 0, aaR = 0, aaI = 0;
   let pbbR = 0, pbbI = 0, pbaR = 0, pbaI = 0, pabR = 0, pabI = 0, paaR = 0, paaI = 0;
@@ -273,31 +273,36 @@ export function react(
     const g1I = -s1 / r1;
     const g2R = c2 / r2;
     const g2I = -s2 / r2;
-    // Monopole rising to end 2: E_t = −j(g1 − cos kd·g2); ρE_ρ = j·Y2.
-    const x2R = g1R - ckd * g2R;
-    const x2I = g1I - ckd * g2I;
-    const e2tR = x2I;
-    const e2tI = -x2R;
-    const al2 = (-zb / r2) * ckd;
-    const zr1 = z / r1;
-    const y2R = al2 * c2 + skd * s2 + zr1 * c1;
-    const y2I = skd * c2 - al2 * s2 - zr1 * s1;
-    // Monopole rising to end 1: E_t = j(g2 − cos kd·g1); ρE_ρ = j·Y1.
-    const x1R = g2R - ckd * g1R;
-    const x1I = g2I - ckd * g1I;
-    const e1tR = -x1I;
-    const e1tI = x1R;
-    const al1 = zr1 * ckd;
-    const zr2 = -zb / r2;
-    const y1R = al1 * c1 + skd * s1 + zr2 * c2;
-    const y1I = skd * c1 - al1 * s1 - zr2 * s2;
-
-    const rhoU = (rx * ux + ry * uy + rz * uz) / re2;
-    // j·Y·rhoU = (−Y.im + j·Y.re)·rhoU
-    const f2R = e2tR * cosPsi - y2I * rhoU;
-    const f2I = e2tI * cosPsi + y2R * rhoU;
-    const f1R = e1tR * cosPsi - y1I * rhoU;
-    const f1I = e1tI * cosPsi + y1R * rhoU;
+    // Monopole rising to end 2: E_t = −j(g1 − cos kd·g2); monopole rising to end 1: E_t = j(g2 − cos kd·g1).
+    const e2tR = g1I - ckd * g2I;
+    const e2tI = ckd * g2R - g1R;
+    const e1tR = ckd * g1I - g2I;
+    const e1tI = g2R - ckd * g1R;
+    let f2R = e2tR * cosPsi;
+    let f2I = e2tI * cosPsi;
+    let f1R = e1tR * cosPsi;
+    let f1I = e1tI * cosPsi;
+    // ρE_ρ = j·Y2 and j·Y1; not needed on parallel segments unless a second projection is asked for.
+    let y2R = 0;
+    let y2I = 0;
+    let y1R = 0;
+    let y1I = 0;
+    if (radial) {
+      const zr1 = z / r1;
+      const zr2 = -zb / r2;
+      const al2 = zr2 * ckd;
+      const al1 = zr1 * ckd;
+      y2R = al2 * c2 + skd * s2 + zr1 * c1;
+      y2I = skd * c2 - al2 * s2 - zr1 * s1;
+      y1R = al1 * c1 + skd * s1 + zr2 * c2;
+      y1I = skd * c1 - al1 * s1 - zr2 * s2;
+      const rhoU = (rx * ux + ry * uy + rz * uz) / re2;
+      // j·Y·rhoU = (−Y.im + j·Y.re)·rhoU
+      f2R -= y2I * rhoU;
+      f2I += y2R * rhoU;
+      f1R -= y1I * rhoU;
+      f1I += y1R * rhoU;
+    }
 
     const sinKs = sinKsArr[i];
     const cosKs = cosKsArr[i];

@@ -25,6 +25,7 @@ import { luFactor, luSolve } from "./complex-lu";
 import { imageFactors, groundPermittivity } from "./ground";
 import { farOrder, lengthPhases, nearPoints, plainPoints, react, setPhases, type SegmentGeometry, type TestPoints } from "./kernel";
 import { SPEED_OF_LIGHT, Z0 } from "./physics";
+import { TupleIndex } from "./tuple-index";
 import { monopoleOverlaps, wireImpedancePerMetre } from "./skin-effect";
 import { segmentDistance, segmentStructure, type SegmentedStructure, type Structure, type Vec3 } from "./structure";
 
@@ -104,7 +105,7 @@ interface Bases {
 interface BlockPlans {
   /** Pair block of segments t ≤ q, at t·count + q. */
   pairOf: Int32Array;
-  /** 1 where the pair block was integrated with q as the test segment. */
+  /** 1 where the pair block of t ≤ q was integrated with q as the test segment. */
   swapped: Uint8Array;
   pair: BlockSet;
   /** Real ground: reflection block of the ordered pair (test t, source q), at t·count + q; empty otherwise. */
@@ -239,68 +240,58 @@ function buildBlocks(seg: SegmentedStructure, geometry: SegmentGeometry, maxMHz:
     return plain(test, farOrder(gap, geometry.length[test], kMax));
   };
 
-  const shapes = shapeKeys(seg, geometry);
-  const keyOf = (test: number, source: number) =>
-    [
-      shapes[test],
-      shapes[source],
-      test === source ? "self" : "",
-      quantise(seg.start[3 * source] - seg.start[3 * test]),
-      quantise(seg.start[3 * source + 1] - seg.start[3 * test + 1]),
-      quantise(seg.start[3 * source + 2] - seg.start[3 * test + 2]),
-    ].join("|");
-  /** Blocks for the given (test, source) pairs; `source` says whether the plan is for the source or its mirror image, `withImage` adds a plan for the image too. */
-  const collect = (pairs: Iterable<[number, number]>, source: "direct" | "mirrored", withImage: boolean) => {
-    const index = new Map<string, number>();
-    const representatives: [number, number][] = [];
+  const shapeIndex = new Map<string, number>();
+  const shapes = Int32Array.from(shapeKeys(seg, geometry), (key) => {
+    let id = shapeIndex.get(key);
+    if (id === undefined) {
+      id = shapeIndex.size;
+      shapeIndex.set(key, id);
+    }
+    return id;
+  });
+  const offset = (test: number, source: number, c: number) => quantise(seg.start[3 * source + c] - seg.start[3 * test + c]);
+  /**
+   * Blocks for the pairs of segments: every ordered pair, or each unordered pair once with the shorter segment
+   * as the test segment. `plan` says whether the quadrature is for the source or its mirror image, `withImage`
+   * adds a plan for the image too.
+   */
+  const collect = (pairs: "unordered" | "ordered", plan: "direct" | "mirrored", withImage: boolean) => {
+    const index = new TupleIndex(pairs === "unordered" ? (n * (n + 1)) / 2 : n * n);
+    const tests: number[] = [];
+    const sources: number[] = [];
     const blockOf = new Int32Array(n * n);
-    for (const [test, source] of pairs) {
-      const key = keyOf(test, source);
-      let block = index.get(key);
-      if (block === undefined) {
-        block = representatives.length;
-        index.set(key, block);
-        representatives.push([test, source]);
+    for (let t = 0; t < n; t++) {
+      for (let q = pairs === "unordered" ? t : 0; q < n; q++) {
+        const swap = pairs === "unordered" && geometry.length[q] < geometry.length[t];
+        const [test, source] = swap ? [q, t] : [t, q];
+        // Self pairs get shape −1 as source: skin effect and the self integral belong to them alone.
+        const block = index.idOf(shapes[test], t === q ? -1 : shapes[source], offset(test, source, 0), offset(test, source, 1), offset(test, source, 2), 0);
+        if (block === tests.length) {
+          tests.push(test);
+          sources.push(source);
+        }
+        blockOf[t * n + q] = block;
+        if (swap) swapped[t * n + q] = 1;
       }
-      blockOf[test * n + source] = block;
     }
     const set: BlockSet = {
-      count: representatives.length,
-      test: Int32Array.from(representatives, ([t]) => t),
-      source: Int32Array.from(representatives, ([, q]) => q),
-      plan: new Int32Array(representatives.length),
-      imagePlan: new Int32Array(withImage ? representatives.length : 0),
+      count: tests.length,
+      test: Int32Array.from(tests),
+      source: Int32Array.from(sources),
+      plan: Int32Array.from(tests, (t, b) => planFor(t, sources[b], plan === "mirrored")),
+      imagePlan: withImage ? Int32Array.from(tests, (t, b) => planFor(t, sources[b], true)) : new Int32Array(0),
     };
-    representatives.forEach(([t, q], b) => {
-      set.plan[b] = planFor(t, q, source === "mirrored");
-      if (withImage) set.imagePlan[b] = planFor(t, q, true);
-    });
     return { set, blockOf };
   };
 
-  // Pair blocks: free space, plus the image in a perfect ground; the shorter segment is the test segment.
+  // Pair blocks: free space, plus the image in a perfect ground.
   const swapped = new Uint8Array(n * n);
-  function* unordered(): Generator<[number, number]> {
-    for (let t = 0; t < n; t++) {
-      for (let q = t; q < n; q++) {
-        const swap = geometry.length[q] < geometry.length[t];
-        swapped[t * n + q] = swap ? 1 : 0;
-        yield swap ? [q, t] : [t, q];
-      }
-    }
-  }
-  const pairs = collect(unordered(), "direct", seg.ground.kind === "perfect");
-  const pairOf = new Int32Array(n * n);
-  for (let t = 0; t < n; t++) {
-    for (let q = t; q < n; q++) pairOf[t * n + q] = swapped[t * n + q] ? pairs.blockOf[q * n + t] : pairs.blockOf[t * n + q];
-  }
+  const pairs = collect("unordered", "direct", seg.ground.kind === "perfect");
+  const pairOf = pairs.blockOf;
 
   // Reflection blocks: real ground, every ordered pair, the source mirrored.
   const real = seg.ground.kind === "real";
-  function* ordered(): Generator<[number, number]> {
-    for (let t = 0; t < n; t++) for (let q = 0; q < n; q++) yield [t, q];
-  }
-  const reflections = real ? collect(ordered(), "mirrored", false) : { set: emptySet(), blockOf: new Int32Array(0) };
+  const reflections = real ? collect("ordered", "mirrored", false) : { set: emptySet(), blockOf: new Int32Array(0) };
   const cosTheta = new Float64Array(reflections.set.count);
   const horizontal = new Float64Array(3 * reflections.set.count);
   for (let b = 0; b < reflections.set.count; b++) {
