@@ -18,10 +18,9 @@
  * so those terms cancel exactly in every basis function (also at bends and
  * junctions, and with a basis completed by its image in a perfect ground).
  *
- * Thin-wire reduced kernel: the source current is a filament on the axis and
- * the field is taken at one wire radius from it, i.e. ρ² → ρ² + a². For two
- * wires of different radii the root mean square of the radii is used, which
- * keeps the matrix symmetric and equals the radius when both are the same.
+ * Thin-wire reduced kernel: the source current is a filament on its axis and
+ * the field is taken on the test wire's surface, i.e. ρ² → ρ² + a² with a the
+ * test wire's radius (the caller passes a²).
  *
  * The test integral along the other segment uses Gauss–Legendre quadrature;
  * where the test segment passes near an end of the source (self terms,
@@ -140,10 +139,16 @@ export function nearPoints(
     if (gap < NEAR_FACTOR * d) near.push({ sStar, clamped, h: Math.sqrt(perp2 + a2), gap });
   }
   if (near.length === 0) return null;
-  near.sort((p, q) => p.clamped - q.clamped || p.gap - q.gap);
-  // Boundaries: the test ends, each near end's foot, and midway between feet; every piece touches one foot.
+  near.sort((p, q) => p.clamped - q.clamped);
+  // Ends whose feet coincide (up to rounding) share one foot: the nearest of them decides the map.
+  const feet: NearEnd[] = [];
+  for (const end of near) {
+    const last = feet[feet.length - 1];
+    if (last === undefined || end.clamped - last.clamped > 1e-9 * d) feet.push(end);
+    else if (end.gap < last.gap) feet[feet.length - 1] = end;
+  }
+  // Boundaries: the test ends, each foot, and midway between feet; every piece touches one foot.
   const pieces: { from: number; to: number; end: NearEnd }[] = [];
-  const feet = near.filter((n, i) => i === 0 || n.clamped - near[i - 1].clamped > 1e-12 * d);
   let cursor = 0;
   feet.forEach((foot, i) => {
     if (foot.clamped > cursor) pieces.push({ from: cursor, to: foot.clamped, end: foot });
@@ -187,16 +192,18 @@ export function lengthPhases(geometry: SegmentGeometry, k: number): Float64Array
  * `t` and the two monopoles of source segment `q` (or of its mirror image in
  * z = 0), with `points` phased by setPhases and `lengthPhases` for the same k.
  *
- * With `reciprocal`, each reaction also gets the term that makes it
+ * With `chargeTerm`, each reaction also gets the term that makes it
  * symmetric in test and source: adding back the source's node charge Q and
  * integrating its part by parts, −∫ I·E_Q ds = −Φ_Q(test node) + ∫ I′·Φ_Q ds.
  * The first part is symmetric already; the second, (jη/4πk)·∫ I′_test·g(node) ds,
- * is what is added. Both parts cancel over whole basis functions (the two
- * halves of a source basis have equal and opposite node charges), so the
- * basis matrix is unchanged, but a pair of segments is then integrated once
- * and used both ways. This holds for free space and a perfect ground, whose
- * image field is a true field; not under the reflection-coefficient
- * approximation, which scales the image field's parts separately.
+ * is what is added. It depends on the source only through its node, so it
+ * cancels over every whole source basis function (whose two halves share the
+ * node with opposite signs), provided all reactions with that test monopole
+ * include it; the basis matrix is unchanged, but a pair of segments with a
+ * symmetric kernel is then integrated once and used both ways. This holds for
+ * free space and a perfect ground, whose image field is a true field; not
+ * under the reflection-coefficient approximation, which scales the image
+ * field's parts separately.
  *
  * out[offset..offset+7] receives, as (re, im) pairs, the reactions for (test end, source end)
  * = (2,2), (2,1), (1,2), (1,1), where "end 2" is the monopole whose node is the
@@ -214,7 +221,7 @@ export function react(
   a2: number,
   points: TestPoints,
   second: readonly [number, number, number] | null,
-  reciprocal: boolean,
+  chargeTerm: boolean,
   out: Float64Array,
   offset: number,
 ): void {
@@ -318,7 +325,7 @@ export function react(
     abI += wA * f2I;
     aaR += wA * f1R;
     aaI += wA * f1I;
-    if (reciprocal) {
+    if (chargeTerm) {
       // I′ of the test monopoles: k·cos(k·s′)/sin(kd), s′ from each one's zero end (k is in the factor below).
       const cB = w * cosKs;
       const cA = w * (cosTest * cosKs + sinTest * sinKs);
