@@ -448,30 +448,23 @@ function addSkinEffect(
   for (const j of [2, 3, 4, 5]) blocks[offset + j] += perMetre * cross;
 }
 
+/** Add s·z to entry (min(m, n), max(m, n)) of the upper triangle, twice on the diagonal (both orders meet there). */
+function addUpper(matrix: Float64Array, count: number, m: number, n: number, s: number, zr: number, zi: number): void {
+  const at = m <= n ? 2 * (m * count + n) : 2 * (n * count + m);
+  const f = m === n ? 2 * s : s;
+  matrix[at] += f * zr;
+  matrix[at + 1] += f * zi;
+}
+
 /**
- * Add weight·z to the upper triangle for every pair of basis functions (m, n)
- * using monopoles (rowMono, colMono): at (min, max), twice on the diagonal,
- * since the matrix is symmetric and the lower triangle is copied at the end.
+ * addUpper for every pair of basis functions (m, n) using monopoles (rowMono, colMono), with weight·sign
+ * (the slow path, for monopoles shared by several basis functions at a junction).
  */
 function scatterUpper(bases: Bases, matrix: Float64Array, rowMono: number, colMono: number, zr: number, zi: number, weight: number): void {
-  const { single, singleSign, monoStart, monoBasis, monoSign, count } = bases;
-  const row = single[rowMono];
-  const col = single[colMono];
-  if (row >= 0 && col >= 0) {
-    const s = (row === col ? 2 : 1) * weight * singleSign[rowMono] * singleSign[colMono];
-    const at = row <= col ? 2 * (row * count + col) : 2 * (col * count + row);
-    matrix[at] += s * zr;
-    matrix[at + 1] += s * zi;
-    return;
-  }
+  const { monoStart, monoBasis, monoSign, count } = bases;
   for (let a = monoStart[rowMono]; a < monoStart[rowMono + 1]; a++) {
-    const m = monoBasis[a];
     for (let b = monoStart[colMono]; b < monoStart[colMono + 1]; b++) {
-      const n = monoBasis[b];
-      const s = (m === n ? 2 : 1) * weight * monoSign[a] * monoSign[b];
-      const at = m <= n ? 2 * (m * count + n) : 2 * (n * count + m);
-      matrix[at] += s * zr;
-      matrix[at + 1] += s * zi;
+      addUpper(matrix, count, monoBasis[a], monoBasis[b], weight * monoSign[a] * monoSign[b], zr, zi);
     }
   }
 }
@@ -500,7 +493,10 @@ function fillMatrix(prep: Prepared, mhz: number): Float64Array {
   const matrix = prep.work.matrix;
   matrix.fill(0);
   const pairValues = computeDirectBlocks(prep, prep.blocks.pair, k, mhz, phases, prep.work.pairValues);
+  const { single, singleSign, count } = bases;
   for (let t = 0; t < n; t++) {
+    const rowB = single[2 * t + 1];
+    const rowA = single[2 * t];
     for (let q = t; q < n; q++) {
       const block = pairOf[t * n + q];
       if (block < 0) continue;
@@ -509,10 +505,24 @@ function fillMatrix(prep: Prepared, mhz: number): Float64Array {
       const weight = t === q ? 0.5 : 1;
       // Values are (test end, source end) = (2,2), (2,1), (1,2), (1,1); swapped blocks have q as the test segment.
       const swap = swapped[t * n + q] === 1;
-      scatterUpper(bases, matrix, 2 * t + 1, 2 * q + 1, pairValues[o], pairValues[o + 1], weight);
-      scatterUpper(bases, matrix, 2 * t + 1, 2 * q, pairValues[o + (swap ? 4 : 2)], pairValues[o + (swap ? 5 : 3)], weight);
-      scatterUpper(bases, matrix, 2 * t, 2 * q + 1, pairValues[o + (swap ? 2 : 4)], pairValues[o + (swap ? 3 : 5)], weight);
-      scatterUpper(bases, matrix, 2 * t, 2 * q, pairValues[o + 6], pairValues[o + 7], weight);
+      const oBA = swap ? o + 4 : o + 2;
+      const oAB = swap ? o + 2 : o + 4;
+      const colB = single[2 * q + 1];
+      const colA = single[2 * q];
+      if (rowB >= 0 && rowA >= 0 && colB >= 0 && colA >= 0) {
+        // Every monopole in one basis function: add straight into the upper triangle.
+        const wB = weight * singleSign[2 * t + 1];
+        const wA = weight * singleSign[2 * t];
+        addUpper(matrix, count, rowB, colB, wB * singleSign[2 * q + 1], pairValues[o], pairValues[o + 1]);
+        addUpper(matrix, count, rowB, colA, wB * singleSign[2 * q], pairValues[oBA], pairValues[oBA + 1]);
+        addUpper(matrix, count, rowA, colB, wA * singleSign[2 * q + 1], pairValues[oAB], pairValues[oAB + 1]);
+        addUpper(matrix, count, rowA, colA, wA * singleSign[2 * q], pairValues[o + 6], pairValues[o + 7]);
+      } else {
+        scatterUpper(bases, matrix, 2 * t + 1, 2 * q + 1, pairValues[o], pairValues[o + 1], weight);
+        scatterUpper(bases, matrix, 2 * t + 1, 2 * q, pairValues[oBA], pairValues[oBA + 1], weight);
+        scatterUpper(bases, matrix, 2 * t, 2 * q + 1, pairValues[oAB], pairValues[oAB + 1], weight);
+        scatterUpper(bases, matrix, 2 * t, 2 * q, pairValues[o + 6], pairValues[o + 7], weight);
+      }
     }
   }
   const m = bases.count;
