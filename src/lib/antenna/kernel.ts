@@ -16,7 +16,9 @@
  * The point charge at the node end, I(node)·∇g, is left out: the two halves of
  * every basis function carry equal and opposite charges at their shared node,
  * so those terms cancel exactly in every basis function (also at bends and
- * junctions, and with a basis completed by its image in a perfect ground).
+ * junctions, and with a basis completed by its image in a perfect ground),
+ * as long as both halves' fields at a test point use the same radius, which
+ * is why the kernel takes the test wire's radius.
  *
  * Thin-wire reduced kernel: the source current is a filament on its axis and
  * the field is taken on the test wire's surface, i.e. ρ² → ρ² + a² with a the
@@ -30,6 +32,7 @@
 import { gaussRule } from "./quadrature";
 import { sincos } from "./sincos";
 
+const phase = new Float64Array(2);
 const phase1 = new Float64Array(2);
 const phase2 = new Float64Array(2);
 
@@ -58,8 +61,6 @@ function testPoints(s: Float64Array, w: Float64Array): TestPoints {
   return { s, w, sinKs: new Float64Array(s.length), cosKs: new Float64Array(s.length) };
 }
 
-const phase = new Float64Array(2);
-
 /** Set sin(k·s) and cos(k·s) of every point for wavenumber k. */
 export function setPhases(points: TestPoints, k: number): void {
   for (let i = 0; i < points.s.length; i++) {
@@ -73,11 +74,12 @@ export function setPhases(points: TestPoints, k: number): void {
  * Gauss–Legendre points on a piece near a source end: more when the piece spans
  * many decades of distance (t-range of the sinh map) or much phase.
  */
-export function nearOrder(tRange: number, phase: number): number {
-  return Math.min(32, Math.max(8, Math.ceil(4 + tRange + 8 * phase)));
+function nearOrder(tRange: number, phaseSpan: number): number {
+  return Math.min(32, Math.max(8, Math.ceil(4 + tRange + 8 * phaseSpan)));
 }
+
 /** A source end within this many test-segment lengths of the test segment is treated as near. */
-export const NEAR_FACTOR = 1.5;
+const NEAR_FACTOR = 1.5;
 
 /** Gauss–Legendre points mapped to [0, length]. */
 export function plainPoints(order: number, length: number): TestPoints {

@@ -98,7 +98,7 @@ interface Bases {
  * The reactions between two segments' monopoles come in "blocks" of 2×2.
  *
  * Free space and a perfect ground, segments of the same radius: with the
- * node-charge term of kernel.ts (`reciprocal`), the block of test t and source
+ * node-charge term of kernel.ts (`chargeTerm`), the block of test t and source
  * q is the transpose of the block of test q and source t, so each unordered
  * pair is integrated once, with the shorter segment as the test segment
  * (`swapped` when that is the second one). Segments of different radii: the
