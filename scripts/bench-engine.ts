@@ -7,10 +7,11 @@
  * segmentation, and the ratio (target ≤ 1.0).
  *
  * The machine may be busy, so the engine and nec2c run in turns, in rounds
- * over all cases, after a warm-up, and the figures are medians. Times are CPU times (what each program itself spends;
- * nec2c's own "TOTAL RUN TIME" counts in 10 ms steps, so it runs ten sweeps per
- * process and the figure is divided by ten); wall-clock medians are shown too,
- * nec2c's including its process start and output file.
+ * over all cases, after a warm-up, and the figures are medians. Times are
+ * CPU times, what each program itself spends (nec2c's own "TOTAL RUN TIME"
+ * counts in 10 ms steps, so it runs ten sweeps per process and the figure is
+ * divided by ten); wall-clock medians are shown too, nec2c's including its
+ * process start and output file.
  */
 import { prepareStructure, solveSweep } from "../src/lib/antenna/solver";
 import { CROSS_CHECK_CASES, necDeck, nec2cInstalled, runNec2c, sweepFrequencies, type CrossCheckCase } from "./lib/nec2c";
