@@ -18,7 +18,10 @@ export function useActionForm<S extends z.ZodType<FieldValues, FieldValues>, T =
   const form = useForm<z.input<S>, unknown, z.output<S>>({
     resolver: zodResolver(schema as never) as unknown as Resolver<z.input<S>, unknown, z.output<S>>,
     defaultValues: options.defaultValues,
-    mode: "onBlur",
+    // Check on submit, then again as the person edits a field. Not on blur: a server error
+    // vanishing when the field loses focus moves the layout under the pointer mid-click.
+    mode: "onSubmit",
+    reValidateMode: "onChange",
   });
   const [formMessage, setFormMessage] = useState<{ ok: boolean; text: string } | null>(null);
 
