@@ -7,10 +7,7 @@
  * raise the field by 1.6. Average power = PEP × mode duty factor × transmit-time
  * fraction. Feedline loss is not subtracted, which errs on the safe side.
  */
-
-/** Free-space wave impedance μ0·c (CODATA 2022), used to turn a field limit into a power density. */
-export const FREE_SPACE_IMPEDANCE_OHMS = 376.730313412;
-const SPEED_OF_LIGHT = 299_792_458;
+import { Z0, wavelengthMetres } from "./physics";
 
 /** Power-density factor for a ground reflection that adds 60 % to the field (1.6² = 2.56). */
 export const GROUND_REFLECTION_FACTOR = 2.56;
@@ -110,7 +107,7 @@ function fccUncontrolled(mhz: number): number | undefined {
  * equivalent is the smaller of E²/Z0 and H²·Z0.
  */
 function icnirpPublic(mhz: number): number | undefined {
-  const z0 = FREE_SPACE_IMPEDANCE_OHMS;
+  const z0 = Z0;
   if (mhz < 0.1 || mhz > 2000) return undefined;
   if (mhz <= 30) return Math.min((300 / mhz ** 0.7) ** 2 / z0, (2.2 / mhz) ** 2 * z0);
   if (mhz <= 400) return 2;
@@ -197,7 +194,7 @@ export function exposureDistances(request: ExposureRequest): ExposureResult {
       },
     ];
   });
-  const reactiveNearFieldM = SPEED_OF_LIGHT / (request.mhz * 1e6) / (2 * Math.PI);
+  const reactiveNearFieldM = wavelengthMetres(request.mhz) / (2 * Math.PI);
   const cautions = [
     "These distances come from a far-field formula: treat them as screening numbers, not measurements.",
     ...(distances.some((distance) => distance.distanceM < reactiveNearFieldM)

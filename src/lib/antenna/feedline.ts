@@ -7,10 +7,10 @@
  * matched-loss fit α(f) = k1·√f + k2·f (dB per 100 m, f in MHz).
  */
 import { abs, add, complex, coth, divide, multiply, subtract, tanh, type Complex } from "mathjs";
+import { wavelengthMetres } from "./physics";
 
 /** Nepers to decibels: 1 Np = 20·log10(e) dB. */
 export const DB_PER_NEPER = 20 / Math.LN10;
-const SPEED_OF_LIGHT = 299_792_458;
 
 export type FeedlineTypeId = "rg58" | "rg8x" | "rg213" | "rg174" | "rg6" | "window450";
 
@@ -90,7 +90,7 @@ export interface LineSection {
 }
 
 export function lineSection(type: FeedlineType, mhz: number, lengthM: number): LineSection {
-  const wavelengthInLine = (type.velocityFactor * SPEED_OF_LIGHT) / (mhz * 1e6);
+  const wavelengthInLine = type.velocityFactor * wavelengthMetres(mhz);
   return {
     z0Ohms: type.z0Ohms,
     lossNepers: matchedLossDb(type, mhz, lengthM) / DB_PER_NEPER,
