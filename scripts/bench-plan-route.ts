@@ -1,0 +1,64 @@
+// Prints what running the antenna engine in a worker thread costs: the median time of a
+// dipole plan computed inline against the same plan through runPlan (worker pool), the first
+// call with the worker's start-up, and several plans at once. Run: npm run bench:plan-route
+import { availableParallelism } from "node:os";
+import { plan } from "@/lib/antenna/plan";
+import type { PlanRequestInput } from "@/lib/antenna/plan-schema";
+import { runPlan } from "@/server/engine/run";
+
+const ROUNDS = 30;
+const CONCURRENT = 8;
+
+/** A 20 m dipole 10 m over average ground on 20 m of RG-213: the plan screen's default. */
+const dipolePlan: PlanRequestInput = {
+  family: "dipole",
+  band: "20m",
+  region: 1,
+  heightM: 10,
+  wireDiameterMm: 2,
+  ground: "average",
+  feedline: { type: "rg213", lengthM: 20 },
+  transmitter: { powerW: 100, mode: "ssb" },
+};
+
+const median = (values: number[]) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const middle = Math.floor(sorted.length / 2);
+  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+};
+
+async function timed(run: () => unknown): Promise<number> {
+  const start = performance.now();
+  await run();
+  return performance.now() - start;
+}
+
+async function rounds(run: () => unknown): Promise<number[]> {
+  const times: number[] = [];
+  for (let round = 0; round < ROUNDS; round++) times.push(await timed(run));
+  return times;
+}
+
+async function main() {
+  const firstWorkerCall = await timed(() => runPlan(dipolePlan));
+  for (let warm = 0; warm < 5; warm++) plan(dipolePlan);
+  const inline = median(await rounds(() => plan(dipolePlan)));
+  const worker = median(await rounds(() => runPlan(dipolePlan)));
+  const inlineBatch = await timed(() => {
+    for (let n = 0; n < CONCURRENT; n++) plan(dipolePlan);
+  });
+  // Warm every worker of the pool before timing the batch.
+  await Promise.all(Array.from({ length: CONCURRENT }, () => runPlan(dipolePlan)));
+  const workerBatch = await timed(() => Promise.all(Array.from({ length: CONCURRENT }, () => runPlan(dipolePlan))));
+
+  const ms = (value: number) => `${value.toFixed(1)} ms`;
+  console.log(`Dipole plan (20m, 10 m over average ground), ${ROUNDS} rounds each, ${availableParallelism()} cores`);
+  console.log(`  inline, median:                          ${ms(inline)}`);
+  console.log(`  through the worker pool, median:         ${ms(worker)}`);
+  console.log(`  worker overhead (median difference):     ${ms(worker - inline)}`);
+  console.log(`  first call, with the worker's start-up:  ${ms(firstWorkerCall)}`);
+  console.log(`  ${CONCURRENT} plans one after another, inline:    ${ms(inlineBatch)}`);
+  console.log(`  ${CONCURRENT} plans at once through the pool:     ${ms(workerBatch)}`);
+}
+
+void main();
