@@ -41,6 +41,8 @@ export interface EndVoltages {
   powerW: number;
   thresholdVrms: number;
   thresholdReason: string;
+  /** How far to trust the figures. */
+  accuracy: string;
   points: EndVoltage[];
   caution: string;
 }
@@ -202,6 +204,8 @@ export function endVoltages(structure: Structure, solution: Solution, wireLabels
     thresholdVrms: TOUCH_DANGER_VRMS,
     thresholdReason:
       "50 V RMS is the extra-low-voltage limit for AC (IEC 61140 / IEC 60364, from memory); RF above it burns through a fingertip's small contact area.",
+    accuracy:
+      "Estimated from the model's charge along the wire; the tip figure grows slowly with finer segmentation, so read it as ±30 %. Feedline loss is not subtracted, which errs on the safe side.",
     points: [
       point("Feed point terminals", feedPosition, scale),
       ...open.map((end) => {

@@ -17,6 +17,17 @@ export type FamilyId = (typeof FAMILY_IDS)[number];
 
 const finite = (what: string) => z.number({ error: `must be a number (${what})` });
 
+/**
+ * Object errors: unknown fields named one by one, anything else (a missing or
+ * non-object value) as `otherwise`.
+ */
+function objectError(otherwise: string) {
+  return (issue: { code?: string; keys?: string[] }) =>
+    issue.code === "unrecognized_keys" && issue.keys
+      ? `unknown field${issue.keys.length === 1 ? "" : "s"} ${issue.keys.map((key) => `"${key}"`).join(", ")}`
+      : otherwise;
+}
+
 const regionSchema = z.union([z.literal(1), z.literal(2), z.literal(3)], {
   error: "must be the ITU Region, 1, 2 or 3",
 });
@@ -42,7 +53,7 @@ const feedlineSchema = z.strictObject(
     type: z.enum(FEEDLINE_IDS, { error: `must be one of ${FEEDLINE_IDS.join(", ")}` }),
     lengthM: finite("metres").min(0, "must be 0 or more").max(1000, "must be at most 1000 m"),
   },
-  { error: "must be { type, lengthM }" },
+  { error: objectError("must be { type, lengthM }") },
 );
 
 const transmitterSchema = z.strictObject(
@@ -51,7 +62,7 @@ const transmitterSchema = z.strictObject(
     mode: z.enum(MODES, { error: `must be one of ${MODES.join(", ")}` }),
     transmitTimeFraction: finite("0 to 1").gt(0, "must be greater than 0").max(1, "must be at most 1").optional(),
   },
-  { error: "must be { powerW, mode }" },
+  { error: objectError("must be { powerW, mode }") },
 );
 
 const siteFields = {
@@ -71,7 +82,9 @@ const singleBandFields = {
   centreMHz: finite("MHz").positive("must be greater than 0").optional(),
 };
 
-const dipoleSchema = z.strictObject({ family: z.literal("dipole"), ...singleBandFields });
+const PLAN_FIELDS_ERROR = { error: objectError("must be a JSON object with a family") };
+
+const dipoleSchema = z.strictObject({ family: z.literal("dipole"), ...singleBandFields }, PLAN_FIELDS_ERROR);
 
 const invertedVSchema = z.strictObject({
   family: z.literal("inverted-v"),
@@ -80,14 +93,14 @@ const invertedVSchema = z.strictObject({
     .min(60, "must be at least 60° (narrower legs couple too closely)")
     .max(180, "must be at most 180° (180° is a flat dipole)")
     .default(120),
-});
+}, PLAN_FIELDS_ERROR);
 
 const verticalSchema = z.strictObject({
   family: z.literal("vertical"),
   ...singleBandFields,
   radials: finite("count").int("must be a whole number").min(1, "must be at least 1").max(16, "must be at most 16").default(4),
   radialDroopDeg: finite("degrees").min(0, "must be 0° (level) or more").max(80, "must be at most 80°").default(45),
-});
+}, PLAN_FIELDS_ERROR);
 
 const endFedSchema = z.strictObject({
   family: z.literal("end-fed"),
@@ -95,7 +108,7 @@ const endFedSchema = z.strictObject({
   unun: z.enum(["49:1", "64:1"], { error: "must be 49:1 or 64:1" }).default("49:1"),
   farEndHeightM: finite("metres").positive("must be greater than 0").max(300, "must be at most 300 m").optional(),
   counterpoiseM: finite("metres").positive("must be greater than 0").max(50, "must be at most 50 m").optional(),
-});
+}, PLAN_FIELDS_ERROR);
 
 const offCentreFedSchema = z.strictObject({
   family: z.literal("off-centre-fed"),
@@ -104,7 +117,7 @@ const offCentreFedSchema = z.strictObject({
     .min(0.1, "must be at least 0.1")
     .max(0.5, "must be at most 0.5")
     .default(1 / 3),
-});
+}, PLAN_FIELDS_ERROR);
 
 const fanDipoleSchema = z.strictObject({
   family: z.literal("fan-dipole"),
@@ -114,7 +127,7 @@ const fanDipoleSchema = z.strictObject({
     .min(2, "must name 2 or 3 bands")
     .max(3, "must name 2 or 3 bands"),
   spreadDeg: finite("degrees").min(5, "must be at least 5°").max(45, "must be at most 45°").default(15),
-});
+}, PLAN_FIELDS_ERROR);
 
 function checkBandChoice(
   request: { region: ItuRegion; band?: string; centreMHz?: number },
@@ -134,6 +147,7 @@ function checkBandChoice(
     return;
   }
   const mhz = request.centreMHz as number;
+  if (!(mhz > 0)) return; // already reported by the field's own check
   if (mhz < PLAN_MIN_MHZ || mhz > PLAN_MAX_MHZ) {
     ctx.addIssue({ code: "custom", path: ["centreMHz"], message: `must be between ${PLAN_MIN_MHZ} and ${PLAN_MAX_MHZ} MHz` });
   } else if (!bandAt(mhz, request.region)) {

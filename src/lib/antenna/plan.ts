@@ -23,10 +23,10 @@ import {
 import { GROUND_CAUTION, toSolverGround } from "./ground-classes";
 import { wavelengthMetres } from "./physics";
 import { planRequestSchema, type FamilyId, type PlanRequest } from "./plan-schema";
-import { EngineInputError, parseOrThrow } from "./problems";
+import { EngineInputError, parseOrThrow, problem } from "./problems";
 import { tuneLengths } from "./resonance";
 import { solveAt, solveSweep, type PreparedStructure, type Solution } from "./solver";
-import type { Structure, Vec3 } from "./structure";
+import { MAX_KA, type Structure, type Vec3 } from "./structure";
 
 /** Sweep intervals per band: 41 points, band edges and centre among them. */
 export const SWEEP_INTERVALS = 40;
@@ -63,7 +63,9 @@ export interface SwrBandwidth {
 export interface WireCurrent {
   wire: number;
   label: string;
-  /** Distance from the wire's start and RMS current at the transmitter's power, at the centre frequency. */
+  from: Vec3;
+  to: Vec3;
+  /** Distance from the wire's `from` end and RMS current at the transmitter's power, at the centre frequency. */
   points: { distanceM: number; rmsA: number }[];
 }
 
@@ -134,10 +136,24 @@ function siteOf(request: PlanRequest): Site {
   };
 }
 
-/** A validated request's family model; throws EngineInputError on geometry the family cannot build. */
-export function planModel(request: PlanRequest): FamilyModel {
+/**
+ * A validated request's family model, for solving up to `topMHz` of its
+ * elements (by default the top of the plan's sweep). Throws EngineInputError on
+ * geometry the family cannot build or the thin-wire model cannot take.
+ */
+export function planModel(
+  request: PlanRequest,
+  topMHz: (elements: ElementTarget[]) => number = sweepTopMHz,
+): FamilyModel {
   const model = familyModel(request, elementTargets(request), siteOf(request));
-  const problems = model.problems();
+  const top = topMHz(model.elements);
+  const thickest = (MAX_KA * wavelengthMetres(top) * 1000) / Math.PI;
+  const problems = [
+    ...model.problems(),
+    ...(request.wireDiameterMm > thickest
+      ? [`wireDiameterMm: too thick for a thin-wire model at ${significant(top)} MHz (at most ${significant(thickest)} mm)`]
+      : []),
+  ];
   if (problems.length > 0) throw new EngineInputError(problems);
   return model;
 }
@@ -206,6 +222,8 @@ function wireCurrents(structure: Structure, solution: Solution, wireLabels: stri
   return structure.wires.map((w, index) => ({
     wire: index,
     label: wireLabels[index],
+    from: w.from,
+    to: w.to,
     points: solution.segments
       .filter((segment) => segment.wire === index)
       .map((segment) => {
@@ -320,10 +338,28 @@ export function significant<T>(value: T): T {
   return value;
 }
 
+/**
+ * Run solver work for a request whose fields already passed every check. Should
+ * the solver still refuse the geometry a family built, say so against the
+ * request, not against wires the caller never wrote.
+ */
+export function asRequestProblems<T>(run: () => T): T {
+  try {
+    return run();
+  } catch (error) {
+    if (!(error instanceof EngineInputError)) throw error;
+    throw new EngineInputError(error.problems.map((line) => problem([], `this antenna cannot be modelled as asked (${line})`)));
+  }
+}
+
 /** The plan for a request (unknown input is validated first). */
 export function plan(input: unknown): PlanResult {
   const request = parseOrThrow(planRequestSchema, input);
   const model = planModel(request);
+  return asRequestProblems(() => planFor(request, model));
+}
+
+function planFor(request: PlanRequest, model: FamilyModel): PlanResult {
   const start = model.ruleOfThumb.map((rule) => rule.lengthM);
   const tuned = tuneLengths(model, start, sweepTopMHz(model.elements));
   const { structure, wireLabels } = model.build(tuned.lengths);

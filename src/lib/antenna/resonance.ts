@@ -243,9 +243,10 @@ function bestMatchSearch(
 }
 
 /**
- * Tune every element of the model, starting from `start` (the rule of thumb,
- * or the lengths as built). `maxMHz` is the highest frequency the caller will
- * solve at, so the returned prepared structure can be swept as it is.
+ * Tune every element of the model. A zero-reactance search starts from `start`
+ * (the rule of thumb, or the lengths as built); a best-match search brackets
+ * the tuning's length range instead. `maxMHz` is the highest frequency the
+ * caller will solve at, so the returned prepared structure can be swept as it is.
  */
 export function tuneLengths(model: FamilyModel, start: number[], maxMHz: number): TunedAntenna {
   const counter: Counter = { solves: 0 };

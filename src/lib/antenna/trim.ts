@@ -10,17 +10,26 @@
  * the rule when those do not matter.
  */
 import { z } from "zod";
-import { wavelengthMetres } from "./physics";
 import type { CutPiece } from "./cut-sheet";
-import type { FamilyModel } from "./families/family";
-import { planModel, significant } from "./plan";
+import type { ElementTarget, FamilyModel } from "./families/family";
+import { asRequestProblems, planModel, significant } from "./plan";
 import { planRequestSchema } from "./plan-schema";
 import { EngineInputError, parseOrThrow, problem } from "./problems";
 import { resonantFrequency, tuneLengths } from "./resonance";
 import { prepareStructure } from "./solver";
 
-/** How far a measured resonance may sit from the target before we suspect the sweep is of something else. */
-const MAX_MEASURED_OFFSET = 0.3;
+/** How far a measured resonance (or a built length) may sit from the target (or the rule of thumb) before we suspect a mistake. */
+const MAX_MEASURED_OFFSET = 0.2;
+/**
+ * Highest frequency a trim solves at, as a multiple of the highest target: the
+ * model's resonance is looked for within +15 %, and re-tuning for a measurement
+ * 20 % low can aim 1.15/0.8 = 1.44 times higher.
+ */
+const TRIM_TOP_FACTOR = 1.45;
+
+function trimTopMHz(elements: ElementTarget[]): number {
+  return TRIM_TOP_FACTOR * Math.max(...elements.map((element) => element.targetMHz));
+}
 
 export const trimRequestSchema = z.strictObject({
   plan: planRequestSchema,
@@ -117,16 +126,20 @@ function engineAnswer(
   measured: number[],
 ): { modelMHz: (number | null)[]; lengths: number[] | null } {
   const targets = model.elements.map((element) => element.targetMHz);
-  const maxMHz = (1 + MAX_MEASURED_OFFSET) * Math.max(...targets);
+  const maxMHz = trimTopMHz(model.elements);
   const prepared = prepareStructure(model.build(built).structure, maxMHz);
   const modelMHz = targets.map((target) => resonantFrequency(prepared, model.tuning, target));
   if (modelMHz.some((mhz) => mhz === null)) return { modelMHz, lengths: null };
+  const ratios = model.elements.map((_, k) => (modelMHz[k] as number) / measured[k]);
+  const tuning = model.tuning;
   const shifted: FamilyModel = {
     ...model,
-    elements: model.elements.map((element, k) => ({
-      ...element,
-      targetMHz: (element.targetMHz * (modelMHz[k] as number)) / measured[k],
-    })),
+    elements: model.elements.map((element, k) => ({ ...element, targetMHz: element.targetMHz * ratios[k] })),
+    // A best-match search range moves with its (single) target.
+    tuning:
+      tuning.kind === "best-match"
+        ? { ...tuning, lengthRangeM: [tuning.lengthRangeM[0] / ratios[0], tuning.lengthRangeM[1] / ratios[0]] }
+        : tuning,
   };
   const tuned = tuneLengths(shifted, built, maxMHz);
   return { modelMHz, lengths: tuned.converged ? tuned.lengths : null };
@@ -134,7 +147,7 @@ function engineAnswer(
 
 export function trim(input: unknown): TrimResult {
   const request = parseOrThrow(trimRequestSchema, input);
-  const model = planModel(request.plan);
+  const model = planModel(request.plan, trimTopMHz);
   const count = model.elements.length;
   const problems: string[] = [];
   if (request.measuredMHz.length !== count) {
@@ -152,20 +165,25 @@ export function trim(input: unknown): TrimResult {
     }
   });
   request.builtLengthsM?.forEach((length, k) => {
-    const target = model.elements[k]?.targetMHz;
-    if (target !== undefined && length > wavelengthMetres(target)) {
-      problems.push(problem(["builtLengthsM", k], `${length} m is longer than a whole wavelength at ${target} MHz`));
+    const rule = model.ruleOfThumb[k]?.lengthM;
+    if (rule !== undefined && Math.abs(length / rule - 1) > MAX_MEASURED_OFFSET) {
+      problems.push(
+        problem(["builtLengthsM", k], `${length} m is far from this element's rule-of-thumb ${significant(rule)} m; check it is the whole element in metres`),
+      );
     }
   });
   if (problems.length > 0) throw new EngineInputError(problems);
+  return asRequestProblems(() => trimFor(model, request));
+}
 
+function trimFor(model: FamilyModel, request: z.output<typeof trimRequestSchema>): TrimResult {
   const targets = model.elements.map((element) => element.targetMHz);
   const built =
     request.builtLengthsM ??
     tuneLengths(
       model,
       model.ruleOfThumb.map((rule) => rule.lengthM),
-      (1 + MAX_MEASURED_OFFSET) * Math.max(...targets),
+      trimTopMHz(model.elements),
     ).lengths;
   const ruleLengths = built.map((length, k) => ruleOfThumbLength(length, request.measuredMHz[k], targets[k]));
   const engine = engineAnswer(model, built, request.measuredMHz);

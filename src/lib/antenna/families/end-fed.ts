@@ -69,6 +69,12 @@ export function endFedModel(request: EndFedRequest, element: ElementTarget, site
       };
     },
     problems() {
+      const shortestCounterpoise = Math.max(0.01 * wavelengthMetres(element.targetMHz), (3 * site.wireDiameterMm) / 1000);
+      if (counterpoise < shortestCounterpoise) {
+        return [
+          `counterpoiseM: must be at least ${round(shortestCounterpoise, 3)} m (a hundredth of a wavelength, and 3 wire diameters)`,
+        ];
+      }
       const shortest = 0.9 * rule.lengthM;
       if (Math.abs(rise) > shortest) {
         return [
