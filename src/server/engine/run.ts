@@ -6,7 +6,8 @@
 // `next build`) recognises exactly the form `new Worker(new URL("./file.ts", import.meta.url))`
 // with Node's `worker_threads` Worker, and emits the file with everything it imports as a
 // separate worker entry chunk under .next/server/chunks; `next start` then runs that chunk.
-// The URL must stay written inline in the `new Worker(...)` call for Turbopack to see it.
+// The URL must stay written inline in the `new Worker(...)` call, and the options an object
+// literal, for Turbopack to see it (with `cond ? undefined : {...}` as options it does not).
 // A pool package that takes a file name (piscina, tinypool) would get a path Turbopack never
 // bundles, so Guyline keeps its own small pool (pool.ts).
 // Outside Next (vitest, tsx scripts) the same URL points at the TypeScript source, which
@@ -27,7 +28,7 @@ export const ENGINE_TIME_LIMIT_MS = 30_000;
 const MAX_QUEUED = 32;
 
 function startEngineWorker(): Worker {
-  return new Worker(new URL("./engine.worker.ts", import.meta.url), process.env.NEXT_RUNTIME ? undefined : { execArgv: ["--require", "tsx/cjs"] });
+  return new Worker(new URL("./engine.worker.ts", import.meta.url), { execArgv: process.env.NEXT_RUNTIME ? undefined : ["--require", "tsx/cjs"] });
 }
 
 // One pool per process, kept on globalThis so that every route bundle and hot reload share it.
