@@ -6,7 +6,7 @@ import { plan } from "@/lib/antenna/plan";
 import type { PlanRequestInput } from "@/lib/antenna/plan-schema";
 import { runPlan } from "@/server/engine/run";
 
-const ROUNDS = 30;
+const ROUNDS = 40;
 const CONCURRENT = 8;
 
 /** A 20 m dipole 10 m over average ground on 20 m of RG-213: the plan screen's default. */
@@ -33,17 +33,25 @@ async function timed(run: () => unknown): Promise<number> {
   return performance.now() - start;
 }
 
-async function rounds(run: () => unknown): Promise<number[]> {
-  const times: number[] = [];
-  for (let round = 0; round < ROUNDS; round++) times.push(await timed(run));
-  return times;
+/** Inline and worker rounds taken in turn, so that a change in the machine's load hits both alike. */
+async function interleavedRounds(): Promise<{ inline: number[]; worker: number[] }> {
+  const inline: number[] = [];
+  const worker: number[] = [];
+  for (let round = 0; round < ROUNDS; round++) {
+    inline.push(await timed(() => plan(dipolePlan)));
+    worker.push(await timed(() => runPlan(dipolePlan)));
+  }
+  return { inline, worker };
 }
 
 async function main() {
   const firstWorkerCall = await timed(() => runPlan(dipolePlan));
   for (let warm = 0; warm < 5; warm++) plan(dipolePlan);
-  const inline = median(await rounds(() => plan(dipolePlan)));
-  const worker = median(await rounds(() => runPlan(dipolePlan)));
+  for (let warm = 0; warm < 5; warm++) await runPlan(dipolePlan);
+  const times = await interleavedRounds();
+  const inline = median(times.inline);
+  const worker = median(times.worker);
+  const overhead = median(times.worker.map((time, round) => time - times.inline[round]));
   const inlineBatch = await timed(() => {
     for (let n = 0; n < CONCURRENT; n++) plan(dipolePlan);
   });
@@ -55,7 +63,7 @@ async function main() {
   console.log(`Dipole plan (20m, 10 m over average ground), ${ROUNDS} rounds each, ${availableParallelism()} cores`);
   console.log(`  inline, median:                          ${ms(inline)}`);
   console.log(`  through the worker pool, median:         ${ms(worker)}`);
-  console.log(`  worker overhead (median difference):     ${ms(worker - inline)}`);
+  console.log(`  worker overhead (median of the per-round differences): ${ms(overhead)}`);
   console.log(`  first call, with the worker's start-up:  ${ms(firstWorkerCall)}`);
   console.log(`  ${CONCURRENT} plans one after another, inline:    ${ms(inlineBatch)}`);
   console.log(`  ${CONCURRENT} plans at once through the pool:     ${ms(workerBatch)}`);
