@@ -3,7 +3,6 @@ import { notFound } from "next/navigation";
 import { PlanScreen } from "@/components/antenna-plan/plan-screen";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/notice";
-import { isEditable } from "@/lib/antenna-days/status";
 import { formOfRequest } from "@/lib/plan-screen/form-values";
 import { can } from "@/server/policy";
 import { loadOrNotFound } from "@/server/page-data";
@@ -18,11 +17,9 @@ export const metadata: Metadata = { title: "Station plan" };
 export default async function SlotPlanPage({ params }: { params: Promise<{ dayId: string; slotId: string }> }) {
   const { actor, member } = await requirePageViewer("plans.view");
   const { dayId, slotId } = await params;
-  const { slot, day, site, region, planRequest } = await loadOrNotFound(slotId, (id) => getSlotWithContext(actor, id));
+  const { slot, day, site, region, planRequest, canEdit } = await loadOrNotFound(slotId, (id) => getSlotWithContext(actor, id));
   if (slot.dayId !== dayId) notFound();
   const library = await listLibraryPlans(actor);
-  const coordinator = can(actor, "antennaDays.manage");
-  const open = isEditable(day.status);
   return (
     <>
       <PageHeader title={`${slot.name}: antenna plan`}>
@@ -50,8 +47,8 @@ export default async function SlotPlanPage({ params }: { params: Promise<{ dayId
           siteName: site.name,
           siteGround: { groundClass: site.groundClass, groundConductivitySm: site.groundConductivitySm, groundRelativePermittivity: site.groundRelativePermittivity },
           libraryPlanId: slot.libraryPlanId,
-          canSave: coordinator && open,
-          readOnlyReason: coordinator
+          canSave: canEdit,
+          readOnlyReason: can(actor, "antennaDays.manage")
             ? `This day is ${day.status}: its station plans no longer change. Try changes here as you like.`
             : "Try changes here as you like: only a coordinator can save a plan to the slot.",
           saveToSlot: saveSlotPlanAction,

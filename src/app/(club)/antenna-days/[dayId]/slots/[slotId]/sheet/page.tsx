@@ -15,7 +15,6 @@ import { formatDistance, formatImpedance, formatMHz, formatSwr, type Units } fro
 import { formatInZone, formatRangeInZone } from "@/lib/time";
 import { runPlan } from "@/server/engine/run";
 import { loadOrNotFound } from "@/server/page-data";
-import { listShifts } from "@/server/services/shifts";
 import { getSlotWithContext } from "@/server/services/station-slots";
 import { requirePageViewer } from "@/server/session";
 import { PrintButton } from "./print-button";
@@ -129,9 +128,9 @@ function SafetyBlock({ result, fallZoneM, guyRadiusM, exposureM, units }: { resu
 export default async function StationSheetPage({ params }: { params: Promise<{ dayId: string; slotId: string }> }) {
   const { actor, member } = await requirePageViewer("plans.view");
   const { dayId, slotId } = await params;
-  const { slot, day, site, planRequest } = await loadOrNotFound(slotId, (id) => getSlotWithContext(actor, id));
+  const { slot, day, site, planRequest, shifts } = await loadOrNotFound(slotId, (id) => getSlotWithContext(actor, id));
   if (slot.dayId !== dayId) notFound();
-  const [computed, shifts] = await Promise.all([planOrProblems(planRequest), listShifts(actor, slot.id)]);
+  const computed = await planOrProblems(planRequest);
   const result = "result" in computed ? computed.result : null;
   const parameters = planRequestSchema.safeParse(planRequest);
   const units = member.units;
