@@ -262,8 +262,11 @@ function necNumber(x: number): string {
   return Number(x.toPrecision(10)).toString();
 }
 
-/** The NEC-2 card deck for a case. */
-export function necDeck(c: CrossCheckCase): string {
+/**
+ * The NEC-2 card deck for a case. For timing, `quiet` leaves out the printout
+ * of the currents (PT −1) and `repeat` runs the sweep several times in one process.
+ */
+export function necDeck(c: CrossCheckCase, options: { quiet?: boolean; repeat?: number } = {}): string {
   const { wires, feed, ground } = c.structure;
   const segmentsOf = (i: number) => c.necSegments?.[i] ?? wires[i].segments;
   const cards = [`CM ${c.description}`, "CE"];
@@ -287,8 +290,9 @@ export function necDeck(c: CrossCheckCase): string {
     throw new Error(`${c.name}: no NEC-2 segment of wire ${feed.wire} is centred at ${feed.at}`);
   }
   cards.push(`EX 0 ${feed.wire + 1} ${source} 0 1.0 0.0`);
-  cards.push(`FR 0 ${c.sweep.count} 0 0 ${c.sweep.startMHz} ${c.sweep.stepMHz}`);
-  cards.push("XQ", "EN");
+  if (options.quiet) cards.push("PT -1 0 0 0");
+  for (let i = 0; i < (options.repeat ?? 1); i++) cards.push(`FR 0 ${c.sweep.count} 0 0 ${c.sweep.startMHz} ${c.sweep.stepMHz}`, "XQ");
+  cards.push("EN");
   return `${cards.join("\n")}\n`;
 }
 
@@ -308,15 +312,16 @@ export function parseNecOutput(output: string): ImpedancePoint[] {
   return points;
 }
 
-/** Run nec2c on a deck and return its impedances (and its wall-clock time in ms). */
-export function runNec2c(deck: string): { points: ImpedancePoint[]; milliseconds: number } {
+/** Run nec2c on a deck and return its impedances, its wall-clock time and its output, in ms. */
+export function runNec2c(deck: string): { points: ImpedancePoint[]; milliseconds: number; output: string } {
   const dir = mkdtempSync(join(tmpdir(), "nec2c-"));
   try {
     writeFileSync(join(dir, "case.nec"), deck);
     const started = performance.now();
     execFileSync(NEC2C_PATH, [`-i${join(dir, "case.nec")}`, `-o${join(dir, "case.out")}`], { stdio: "ignore" });
     const milliseconds = performance.now() - started;
-    return { points: parseNecOutput(readFileSync(join(dir, "case.out"), "utf8")), milliseconds };
+    const output = readFileSync(join(dir, "case.out"), "utf8");
+    return { points: parseNecOutput(output), milliseconds, output };
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

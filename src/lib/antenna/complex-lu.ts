@@ -12,6 +12,16 @@ export interface ComplexLU {
   pivot: Int32Array;
 }
 
+/** Real part of the multiplier a[at]·(1/pivot), with 1/pivot = (invR, invI). */
+function multiplierRe(a: Float64Array, at: number, invR: number, invI: number): number {
+  return a[at] * invR - a[at + 1] * invI;
+}
+
+/** Imaginary part of the multiplier a[at]·(1/pivot). */
+function multiplierIm(a: Float64Array, at: number, invR: number, invI: number): number {
+  return a[at] * invI + a[at + 1] * invR;
+}
+
 /** Factor the n×n interleaved matrix `a` in place (a becomes L and U). Throws on a singular matrix. */
 export function luFactor(a: Float64Array, n: number): ComplexLU {
   if (a.length !== 2 * n * n) throw new RangeError(`matrix storage holds ${a.length} numbers, not 2·${n}²`);
@@ -43,20 +53,53 @@ export function luFactor(a: Float64Array, n: number): ComplexLU {
     const pi = a[rowK + 2 * k + 1];
     const invR = pr / best;
     const invI = -pi / best;
-    for (let i = k + 1; i < n; i++) {
-      const rowI = 2 * i * n;
-      const xr = a[rowI + 2 * k];
-      const xi = a[rowI + 2 * k + 1];
-      const lr = xr * invR - xi * invI;
-      const li = xr * invI + xi * invR;
-      a[rowI + 2 * k] = lr;
-      a[rowI + 2 * k + 1] = li;
-      if (lr === 0 && li === 0) continue;
+    // Rows below are eliminated four at a time, so that each element of the pivot row is loaded once for four rows.
+    let i = k + 1;
+    for (; i + 3 < n; i += 4) {
+      const r1 = 2 * i * n;
+      const r2 = r1 + 2 * n;
+      const r3 = r2 + 2 * n;
+      const r4 = r3 + 2 * n;
+      const l1r = multiplierRe(a, r1 + 2 * k, invR, invI);
+      const l1i = multiplierIm(a, r1 + 2 * k, invR, invI);
+      const l2r = multiplierRe(a, r2 + 2 * k, invR, invI);
+      const l2i = multiplierIm(a, r2 + 2 * k, invR, invI);
+      const l3r = multiplierRe(a, r3 + 2 * k, invR, invI);
+      const l3i = multiplierIm(a, r3 + 2 * k, invR, invI);
+      const l4r = multiplierRe(a, r4 + 2 * k, invR, invI);
+      const l4i = multiplierIm(a, r4 + 2 * k, invR, invI);
+      a[r1 + 2 * k] = l1r;
+      a[r1 + 2 * k + 1] = l1i;
+      a[r2 + 2 * k] = l2r;
+      a[r2 + 2 * k + 1] = l2i;
+      a[r3 + 2 * k] = l3r;
+      a[r3 + 2 * k + 1] = l3i;
+      a[r4 + 2 * k] = l4r;
+      a[r4 + 2 * k + 1] = l4i;
       for (let j = 2 * (k + 1); j < 2 * n; j += 2) {
         const ur = a[rowK + j];
         const ui = a[rowK + j + 1];
-        a[rowI + j] -= lr * ur - li * ui;
-        a[rowI + j + 1] -= lr * ui + li * ur;
+        a[r1 + j] -= l1r * ur - l1i * ui;
+        a[r1 + j + 1] -= l1r * ui + l1i * ur;
+        a[r2 + j] -= l2r * ur - l2i * ui;
+        a[r2 + j + 1] -= l2r * ui + l2i * ur;
+        a[r3 + j] -= l3r * ur - l3i * ui;
+        a[r3 + j + 1] -= l3r * ui + l3i * ur;
+        a[r4 + j] -= l4r * ur - l4i * ui;
+        a[r4 + j + 1] -= l4r * ui + l4i * ur;
+      }
+    }
+    for (; i < n; i++) {
+      const r1 = 2 * i * n;
+      const lr = multiplierRe(a, r1 + 2 * k, invR, invI);
+      const li = multiplierIm(a, r1 + 2 * k, invR, invI);
+      a[r1 + 2 * k] = lr;
+      a[r1 + 2 * k + 1] = li;
+      for (let j = 2 * (k + 1); j < 2 * n; j += 2) {
+        const ur = a[rowK + j];
+        const ui = a[rowK + j + 1];
+        a[r1 + j] -= lr * ur - li * ui;
+        a[r1 + j + 1] -= lr * ui + li * ur;
       }
     }
   }

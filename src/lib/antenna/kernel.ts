@@ -29,6 +29,10 @@
  * each piece is mapped by s = s* + h·sinh(t), which takes out the 1/R peak.
  */
 import { gaussRule } from "./quadrature";
+import { sincos } from "./sincos";
+
+const phase1 = new Float64Array(2);
+const phase2 = new Float64Array(2);
 
 /** Segment geometry in flat arrays: start point, unit direction, length (three numbers per vector). */
 export interface SegmentGeometry {
@@ -38,10 +42,32 @@ export interface SegmentGeometry {
   length: Float64Array;
 }
 
-/** Quadrature points (position s along the test segment from its start) and weights. */
+/**
+ * Quadrature points (position s along the test segment from its start) and
+ * weights, with sin(k·s) and cos(k·s) kept for the frequency last set by
+ * `setPhases`: plans are shared by many pairs, so these are computed once per
+ * frequency rather than once per pair.
+ */
 export interface TestPoints {
   s: Float64Array;
   w: Float64Array;
+  sinKs: Float64Array;
+  cosKs: Float64Array;
+}
+
+function testPoints(s: Float64Array, w: Float64Array): TestPoints {
+  return { s, w, sinKs: new Float64Array(s.length), cosKs: new Float64Array(s.length) };
+}
+
+const phase = new Float64Array(2);
+
+/** Set sin(k·s) and cos(k·s) of every point for wavenumber k. */
+export function setPhases(points: TestPoints, k: number): void {
+  for (let i = 0; i < points.s.length; i++) {
+    sincos(k * points.s[i], phase);
+    points.sinKs[i] = phase[0];
+    points.cosKs[i] = phase[1];
+  }
 }
 
 /**
@@ -63,7 +89,7 @@ export function plainPoints(order: number, length: number): TestPoints {
     s[i] = (length * (rule.nodes[i] + 1)) / 2;
     w[i] = (length * rule.weights[i]) / 2;
   }
-  return { s, w };
+  return testPoints(s, w);
 }
 
 /** Points for a far pair: fewer the farther the source is, relative to the test segment's length. */
@@ -142,62 +168,88 @@ export function nearPoints(
       w[j] = ((t1 - t0) / 2) * rule.weights[i] * end.h * Math.cosh(tt);
     }
   }
-  return { s, w };
+  return testPoints(s, w);
+}
+
+/** sin(k·d) and cos(k·d) of every segment length, interleaved, for wavenumber k. */
+export function lengthPhases(geometry: SegmentGeometry, k: number): Float64Array {
+  const out = new Float64Array(2 * geometry.count);
+  for (let i = 0; i < geometry.count; i++) {
+    sincos(k * geometry.length[i], phase);
+    out[2 * i] = phase[0];
+    out[2 * i + 1] = phase[1];
+  }
+  return out;
 }
 
 /**
  * Reactions −∫ I_test · E_source ds between the two monopoles of test segment
- * `t` and the two monopoles of the source segment from (x1,y1,z1) to (x2,y2,z2).
+ * `t` and the two monopoles of source segment `q` (or of its mirror image in
+ * z = 0), with `points` phased by setPhases and `lengthPhases` for the same k.
  *
- * out[0..7] receives, as (re, im) pairs, the reactions for (test end, source end)
+ * With `reciprocal`, each reaction also gets the term that makes it
+ * symmetric in test and source: adding back the source's node charge Q and
+ * integrating its part by parts, −∫ I·E_Q ds = −Φ_Q(test node) + ∫ I′·Φ_Q ds.
+ * The first part is symmetric already; the second, (jη/4πk)·∫ I′_test·g(node) ds,
+ * is what is added. Both parts cancel over whole basis functions (the two
+ * halves of a source basis have equal and opposite node charges), so the
+ * basis matrix is unchanged, but a pair of segments is then integrated once
+ * and used both ways. This holds for free space and a perfect ground, whose
+ * image field is a true field; not under the reflection-coefficient
+ * approximation, which scales the image field's parts separately.
+ *
+ * out[offset..offset+7] receives, as (re, im) pairs, the reactions for (test end, source end)
  * = (2,2), (2,1), (1,2), (1,1), where "end 2" is the monopole whose node is the
  * segment's end and "end 1" the one whose node is its start. When `second` is
- * given, out[8..15] receives the same with the field projected on that unit
+ * given, out[offset+8..offset+15] receives the same with the field projected on that unit
  * vector instead of the test direction (the caller multiplies by second·u).
  */
 export function react(
   k: number,
-  test: SegmentGeometry,
+  geometry: SegmentGeometry,
+  lengthPhases: Float64Array,
   t: number,
-  x1: number,
-  y1: number,
-  z1: number,
-  x2: number,
-  y2: number,
-  z2: number,
+  q: number,
+  mirror: boolean,
   a2: number,
   points: TestPoints,
   second: readonly [number, number, number] | null,
+  reciprocal: boolean,
   out: Float64Array,
+  offset: number,
 ): void {
-  const ax = test.start[3 * t];
-  const ay = test.start[3 * t + 1];
-  const az = test.start[3 * t + 2];
-  const ux = test.dir[3 * t];
-  const uy = test.dir[3 * t + 1];
-  const uz = test.dir[3 * t + 2];
-  const dTest = test.length[t];
-  const sinTest = Math.sin(k * dTest);
+  const ax = geometry.start[3 * t];
+  const ay = geometry.start[3 * t + 1];
+  const az = geometry.start[3 * t + 2];
+  const ux = geometry.dir[3 * t];
+  const uy = geometry.dir[3 * t + 1];
+  const uz = geometry.dir[3 * t + 2];
+  const sinTest = lengthPhases[2 * t];
+  const cosTest = lengthPhases[2 * t + 1];
 
-  let tx = x2 - x1;
-  let ty = y2 - y1;
-  let tz = z2 - z1;
-  const d = Math.hypot(tx, ty, tz);
-  tx /= d;
-  ty /= d;
-  tz /= d;
-  const ckd = Math.cos(k * d);
-  const skd = Math.sin(k * d);
+  // The source, or its mirror image in z = 0.
+  const zSign = mirror ? -1 : 1;
+  const x1 = geometry.start[3 * q];
+  const y1 = geometry.start[3 * q + 1];
+  const z1 = zSign * geometry.start[3 * q + 2];
+  const tx = geometry.dir[3 * q];
+  const ty = geometry.dir[3 * q + 1];
+  const tz = zSign * geometry.dir[3 * q + 2];
+  const d = geometry.length[q];
+  const skd = lengthPhases[2 * q];
+  const ckd = lengthPhases[2 * q + 1];
   const cosPsi = tx * ux + ty * uy + tz * uz;
   const withSecond = second !== null;
   const px = withSecond ? second[0] : 0;
   const py = withSecond ? second[1] : 0;
   const pz = withSecond ? second[2] : 0;
   const cosP = tx * px + ty * py + tz * pz;
+  const radial = withSecond || Math.abs(cosPsi) < 1 - 1e-12;
 
   let bbR = 0, bbI = 0, baR = 0, baI = 0, abR = 0, abI = 0, aaR = 0, aaI = 0;
   let pbbR = 0, pbbI = 0, pbaR = 0, pbaI = 0, pabR = 0, pabI = 0, paaR = 0, paaI = 0;
-  const { s: sArr, w: wArr } = points;
+  let qbbR = 0, qbbI = 0, qbaR = 0, qbaI = 0, qabR = 0, qabI = 0, qaaR = 0, qaaI = 0;
+  const { s: sArr, w: wArr, sinKs: sinKsArr, cosKs: cosKsArr } = points;
   for (let i = 0; i < sArr.length; i++) {
     const s = sArr[i];
     const vx = ax + s * ux - x1;
@@ -211,44 +263,53 @@ export function react(
     const zb = z - d;
     const r1 = Math.sqrt(z * z + re2);
     const r2 = Math.sqrt(zb * zb + re2);
-    const c1 = Math.cos(k * r1);
-    const s1 = Math.sin(k * r1);
-    const c2 = Math.cos(k * r2);
-    const s2 = Math.sin(k * r2);
+    sincos(k * r1, phase1);
+    sincos(k * r2, phase2);
+    const s1 = phase1[0];
+    const c1 = phase1[1];
+    const s2 = phase2[0];
+    const c2 = phase2[1];
     const g1R = c1 / r1;
     const g1I = -s1 / r1;
     const g2R = c2 / r2;
     const g2I = -s2 / r2;
-    // Monopole rising to end 2: E_t = −j(g1 − cos kd·g2); ρE_ρ = j·Y2.
-    const x2R = g1R - ckd * g2R;
-    const x2I = g1I - ckd * g2I;
-    const e2tR = x2I;
-    const e2tI = -x2R;
-    const al2 = (-zb / r2) * ckd;
-    const zr1 = z / r1;
-    const y2R = al2 * c2 + skd * s2 + zr1 * c1;
-    const y2I = skd * c2 - al2 * s2 - zr1 * s1;
-    // Monopole rising to end 1: E_t = j(g2 − cos kd·g1); ρE_ρ = j·Y1.
-    const x1R = g2R - ckd * g1R;
-    const x1I = g2I - ckd * g1I;
-    const e1tR = -x1I;
-    const e1tI = x1R;
-    const al1 = zr1 * ckd;
-    const zr2 = -zb / r2;
-    const y1R = al1 * c1 + skd * s1 + zr2 * c2;
-    const y1I = skd * c1 - al1 * s1 - zr2 * s2;
+    // Monopole rising to end 2: E_t = −j(g1 − cos kd·g2); monopole rising to end 1: E_t = j(g2 − cos kd·g1).
+    const e2tR = g1I - ckd * g2I;
+    const e2tI = ckd * g2R - g1R;
+    const e1tR = ckd * g1I - g2I;
+    const e1tI = g2R - ckd * g1R;
+    let f2R = e2tR * cosPsi;
+    let f2I = e2tI * cosPsi;
+    let f1R = e1tR * cosPsi;
+    let f1I = e1tI * cosPsi;
+    // ρE_ρ = j·Y2 and j·Y1; not needed on parallel segments unless a second projection is asked for.
+    let y2R = 0;
+    let y2I = 0;
+    let y1R = 0;
+    let y1I = 0;
+    if (radial) {
+      const zr1 = z / r1;
+      const zr2 = -zb / r2;
+      const al2 = zr2 * ckd;
+      const al1 = zr1 * ckd;
+      y2R = al2 * c2 + skd * s2 + zr1 * c1;
+      y2I = skd * c2 - al2 * s2 - zr1 * s1;
+      y1R = al1 * c1 + skd * s1 + zr2 * c2;
+      y1I = skd * c1 - al1 * s1 - zr2 * s2;
+      const rhoU = (rx * ux + ry * uy + rz * uz) / re2;
+      // j·Y·rhoU = (−Y.im + j·Y.re)·rhoU
+      f2R -= y2I * rhoU;
+      f2I += y2R * rhoU;
+      f1R -= y1I * rhoU;
+      f1I += y1R * rhoU;
+    }
 
-    const rhoU = (rx * ux + ry * uy + rz * uz) / re2;
-    // j·Y·rhoU = (−Y.im + j·Y.re)·rhoU
-    const f2R = e2tR * cosPsi - y2I * rhoU;
-    const f2I = e2tI * cosPsi + y2R * rhoU;
-    const f1R = e1tR * cosPsi - y1I * rhoU;
-    const f1I = e1tI * cosPsi + y1R * rhoU;
-
-    const ks = k * s;
+    const sinKs = sinKsArr[i];
+    const cosKs = cosKsArr[i];
     const w = wArr[i] / sinTest;
-    const wB = w * Math.sin(ks);
-    const wA = w * Math.sin(k * dTest - ks);
+    const wB = w * sinKs;
+    // sin(k(d − s)) = sin(kd)·cos(ks) − cos(kd)·sin(ks)
+    const wA = w * (sinTest * cosKs - cosTest * sinKs);
     bbR -= wB * f2R;
     bbI -= wB * f2I;
     baR -= wB * f1R;
@@ -257,6 +318,19 @@ export function react(
     abI += wA * f2I;
     aaR += wA * f1R;
     aaI += wA * f1I;
+    if (reciprocal) {
+      // I′ of the test monopoles: k·cos(k·s′)/sin(kd), s′ from each one's zero end (k is in the factor below).
+      const cB = w * cosKs;
+      const cA = w * (cosTest * cosKs + sinTest * sinKs);
+      qbbR += cB * g2R;
+      qbbI += cB * g2I;
+      qbaR += cB * g1R;
+      qbaI += cB * g1I;
+      qabR += cA * g2R;
+      qabI += cA * g2I;
+      qaaR += cA * g1R;
+      qaaI += cA * g1I;
+    }
     if (withSecond) {
       const rhoP = (rx * px + ry * py + rz * pz) / re2;
       const q2R = e2tR * cosP - y2I * rhoP;
@@ -274,22 +348,24 @@ export function react(
     }
   }
   const c0 = 1 / (4 * Math.PI * skd);
-  out[0] = bbR * c0;
-  out[1] = bbI * c0;
-  out[2] = baR * c0;
-  out[3] = baI * c0;
-  out[4] = abR * c0;
-  out[5] = abI * c0;
-  out[6] = aaR * c0;
-  out[7] = aaI * c0;
+  const q0 = 1 / (4 * Math.PI);
+  // j·q = (−q.im, q.re)
+  out[offset + 0] = bbR * c0 - qbbI * q0;
+  out[offset + 1] = bbI * c0 + qbbR * q0;
+  out[offset + 2] = baR * c0 - qbaI * q0;
+  out[offset + 3] = baI * c0 + qbaR * q0;
+  out[offset + 4] = abR * c0 - qabI * q0;
+  out[offset + 5] = abI * c0 + qabR * q0;
+  out[offset + 6] = aaR * c0 - qaaI * q0;
+  out[offset + 7] = aaI * c0 + qaaR * q0;
   if (withSecond) {
-    out[8] = pbbR * c0;
-    out[9] = pbbI * c0;
-    out[10] = pbaR * c0;
-    out[11] = pbaI * c0;
-    out[12] = pabR * c0;
-    out[13] = pabI * c0;
-    out[14] = paaR * c0;
-    out[15] = paaI * c0;
+    out[offset + 8] = pbbR * c0;
+    out[offset + 9] = pbbI * c0;
+    out[offset + 10] = pbaR * c0;
+    out[offset + 11] = pbaI * c0;
+    out[offset + 12] = pabR * c0;
+    out[offset + 13] = pabI * c0;
+    out[offset + 14] = paaR * c0;
+    out[offset + 15] = paaI * c0;
   }
 }

@@ -82,44 +82,47 @@ const singleBandFields = {
   centreMHz: finite("MHz").positive("must be greater than 0").optional(),
 };
 
-const PLAN_FIELDS_ERROR = { error: objectError("must be a JSON object with a family") };
+/** One family's request: a closed object, so a field of another family is named as unknown. */
+function planObject<Shape extends z.ZodRawShape>(shape: Shape) {
+  return z.strictObject(shape, { error: objectError("must be a JSON object with a family") });
+}
 
-const dipoleSchema = z.strictObject({ family: z.literal("dipole"), ...singleBandFields }, PLAN_FIELDS_ERROR);
+const dipoleSchema = planObject({ family: z.literal("dipole"), ...singleBandFields });
 
-const invertedVSchema = z.strictObject({
+const invertedVSchema = planObject({
   family: z.literal("inverted-v"),
   ...singleBandFields,
   includedAngleDeg: finite("degrees")
     .min(60, "must be at least 60° (narrower legs couple too closely)")
     .max(180, "must be at most 180° (180° is a flat dipole)")
     .default(120),
-}, PLAN_FIELDS_ERROR);
+});
 
-const verticalSchema = z.strictObject({
+const verticalSchema = planObject({
   family: z.literal("vertical"),
   ...singleBandFields,
   radials: finite("count").int("must be a whole number").min(1, "must be at least 1").max(16, "must be at most 16").default(4),
   radialDroopDeg: finite("degrees").min(0, "must be 0° (level) or more").max(80, "must be at most 80°").default(45),
-}, PLAN_FIELDS_ERROR);
+});
 
-const endFedSchema = z.strictObject({
+const endFedSchema = planObject({
   family: z.literal("end-fed"),
   ...singleBandFields,
   unun: z.enum(["49:1", "64:1"], { error: "must be 49:1 or 64:1" }).default("49:1"),
   farEndHeightM: finite("metres").positive("must be greater than 0").max(300, "must be at most 300 m").optional(),
   counterpoiseM: finite("metres").positive("must be greater than 0").max(50, "must be at most 50 m").optional(),
-}, PLAN_FIELDS_ERROR);
+});
 
-const offCentreFedSchema = z.strictObject({
+const offCentreFedSchema = planObject({
   family: z.literal("off-centre-fed"),
   ...singleBandFields,
   feedPosition: finite("fraction of the length")
     .min(0.1, "must be at least 0.1")
     .max(0.5, "must be at most 0.5")
     .default(1 / 3),
-}, PLAN_FIELDS_ERROR);
+});
 
-const fanDipoleSchema = z.strictObject({
+const fanDipoleSchema = planObject({
   family: z.literal("fan-dipole"),
   ...siteFields,
   bands: z
@@ -127,7 +130,7 @@ const fanDipoleSchema = z.strictObject({
     .min(2, "must name 2 or 3 bands")
     .max(3, "must name 2 or 3 bands"),
   spreadDeg: finite("degrees").min(5, "must be at least 5°").max(45, "must be at most 45°").default(15),
-}, PLAN_FIELDS_ERROR);
+});
 
 function checkBandChoice(
   request: { region: ItuRegion; band?: string; centreMHz?: number },

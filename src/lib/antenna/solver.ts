@@ -23,8 +23,9 @@
  */
 import { luFactor, luSolve } from "./complex-lu";
 import { imageFactors, groundPermittivity } from "./ground";
-import { farOrder, nearPoints, plainPoints, react, type SegmentGeometry, type TestPoints } from "./kernel";
+import { farOrder, lengthPhases, nearPoints, plainPoints, react, setPhases, type SegmentGeometry, type TestPoints } from "./kernel";
 import { SPEED_OF_LIGHT, Z0 } from "./physics";
+import { TupleIndex } from "./tuple-index";
 import { monopoleOverlaps, wireImpedancePerMetre } from "./skin-effect";
 import { segmentDistance, segmentStructure, type SegmentedStructure, type Structure, type Vec3 } from "./structure";
 
@@ -57,38 +58,73 @@ class Prepared implements PreparedStructure {
     readonly maxMHz: number,
     readonly seg: SegmentedStructure,
     readonly geometry: SegmentGeometry,
-    readonly basisCount: number,
-    /** Basis functions using each monopole (index 2·segment + end), CSR: monoStart, monoBasis, monoSign. */
-    readonly monoStart: Int32Array,
-    readonly monoBasis: Int32Array,
-    readonly monoSign: Float64Array,
-    /** Voltage of a 1 V delta gap seen by each basis function. */
-    readonly excitation: Float64Array,
-    readonly pairs: PairPlans,
+    readonly bases: Bases,
+    readonly blocks: BlockPlans,
+    /** The segments' end points as returned in every Solution (shared, not copied per frequency). */
+    readonly segmentEnds: { start: Vec3; end: Vec3 }[],
+    /** Buffers reused by every solve (solves are synchronous, so one set per structure is enough). */
+    readonly work: Workspace,
   ) {}
 }
 
+interface Workspace {
+  matrix: Float64Array;
+  pairValues: Float64Array;
+  reflectionValues: Float64Array;
+  rhs: Float64Array;
+}
+
+interface Bases {
+  count: number;
+  /** The one basis function using each monopole and its sign, or −1 where there are none or several (see monoStart). */
+  single: Int32Array;
+  singleSign: Float64Array;
+  /** Basis functions using each monopole (index 2·segment + end), CSR: monoStart, monoBasis, monoSign. */
+  monoStart: Int32Array;
+  monoBasis: Int32Array;
+  monoSign: Float64Array;
+  /** Voltage of a 1 V delta gap seen by each basis function. */
+  excitation: Float64Array;
+}
+
 /**
- * Reactions are computed for every ordered pair (test segment, source segment):
- * with the node charges left out of the monopole fields (kernel.ts), a single
- * monopole pair is not reciprocal, only whole basis functions are. Pairs that
- * are translates of each other (same lengths, radii, directions and relative
- * position, and the same heights over a ground) share one "block", which makes
- * the fill of straight, evenly cut wires nearly linear in the segment count.
+ * The reactions between two segments' monopoles come in "blocks" of 2×2.
+ *
+ * Free space and a perfect ground: with the node-charge term of kernel.ts
+ * (`reciprocal`), the block of test t and source q is the transpose of the
+ * block of test q and source t, so each unordered pair is integrated once,
+ * with the shorter segment as the test segment (`swapped` when that is the
+ * second one). Real ground adds, for every ordered pair, the reflected field,
+ * which is not reciprocal pair by pair.
+ *
+ * Pairs that are translates of each other (same lengths, radii, directions and
+ * relative position, and the same heights over a ground) share one block,
+ * which makes the fill of straight, evenly cut wires nearly linear in the
+ * number of segments.
  */
-interface PairPlans {
-  /** Block index of the ordered pair (test t, source q), at t·count + q. */
-  blockOf: Int32Array;
-  blockCount: number;
-  /** Per block: a representative test and source segment and its quadrature plans. */
-  test: Int32Array;
-  source: Int32Array;
-  freePlan: Int32Array;
-  imagePlan: Int32Array;
-  /** Real ground, per block: cos of the angle of incidence, and the horizontal unit vector ⊥ the plane of incidence. */
+interface BlockPlans {
+  /** Pair block of segments t ≤ q, at t·count + q. */
+  pairOf: Int32Array;
+  /** 1 where the pair block of t ≤ q was integrated with q as the test segment. */
+  swapped: Uint8Array;
+  pair: BlockSet;
+  /** Real ground: reflection block of the ordered pair (test t, source q), at t·count + q; empty otherwise. */
+  reflectionOf: Int32Array;
+  reflection: BlockSet;
+  /** Real ground, per reflection block: cos of the angle of incidence and the horizontal unit vector ⊥ the plane of incidence. */
   cosTheta: Float64Array;
   horizontal: Float64Array;
   plans: TestPoints[];
+}
+
+/** Representative (test, source) segments of each block and their quadrature plans. */
+interface BlockSet {
+  count: number;
+  test: Int32Array;
+  source: Int32Array;
+  plan: Int32Array;
+  /** Perfect ground: plan for the image of the source; empty otherwise. */
+  imagePlan: Int32Array;
 }
 
 function endPoint(array: Float64Array, i: number, mirror: boolean): [number, number, number] {
@@ -109,14 +145,6 @@ function buildGeometry(seg: SegmentedStructure): SegmentGeometry {
     dir[3 * i + 2] = dz / d;
   }
   return { count: seg.count, start: seg.start, dir, length };
-}
-
-interface Bases {
-  count: number;
-  monoStart: Int32Array;
-  monoBasis: Int32Array;
-  monoSign: Float64Array;
-  excitation: Float64Array;
 }
 
 /** Basis functions from the node connectivity, and the excitation of a 1 V gap at the feed. */
@@ -155,7 +183,9 @@ function buildBases(seg: SegmentedStructure): Bases {
       monoSign[monoStart[mono] + j] = sign;
     }),
   );
-  return { count: terms.length, monoStart, monoBasis, monoSign, excitation };
+  const single = Int32Array.from({ length: 2 * seg.count }, (_, mono) => (perMono[mono].length === 1 ? perMono[mono][0].basis : -1));
+  const singleSign = Float64Array.from({ length: 2 * seg.count }, (_, mono) => (perMono[mono].length === 1 ? perMono[mono][0].sign : 0));
+  return { count: terms.length, single, singleSign, monoStart, monoBasis, monoSign, excitation };
 }
 
 /** Round to 1 nm (or one part in 10⁹ of a direction) for recognising translated pairs. */
@@ -179,10 +209,12 @@ function shapeKeys(seg: SegmentedStructure, geometry: SegmentGeometry): string[]
   );
 }
 
-function buildPairs(seg: SegmentedStructure, geometry: SegmentGeometry, maxMHz: number): PairPlans {
+function squaredRadius(seg: SegmentedStructure, t: number, q: number): number {
+  return (seg.radius[t] * seg.radius[t] + seg.radius[q] * seg.radius[q]) / 2;
+}
+
+function buildBlocks(seg: SegmentedStructure, geometry: SegmentGeometry, maxMHz: number): BlockPlans {
   const n = seg.count;
-  const withImage = seg.ground.kind !== "free";
-  const real = seg.ground.kind === "real";
   const kMax = (2 * Math.PI * maxMHz * 1e6) / SPEED_OF_LIGHT;
   const plans: TestPoints[] = [];
   const plainIndex = new Map<number, number>();
@@ -196,10 +228,10 @@ function buildPairs(seg: SegmentedStructure, geometry: SegmentGeometry, maxMHz: 
     }
     return index;
   };
-  const planFor = (test: number, source: number, mirror: boolean, a2: number): number => {
+  const planFor = (test: number, source: number, mirror: boolean): number => {
     const p1 = endPoint(seg.start, source, mirror);
     const p2 = endPoint(seg.end, source, mirror);
-    const near = nearPoints(geometry, test, [p1, p2], a2, kMax);
+    const near = nearPoints(geometry, test, [p1, p2], squaredRadius(seg, test, source), kMax);
     if (near !== null) {
       plans.push(near);
       return plans.length - 1;
@@ -208,80 +240,102 @@ function buildPairs(seg: SegmentedStructure, geometry: SegmentGeometry, maxMHz: 
     return plain(test, farOrder(gap, geometry.length[test], kMax));
   };
 
-  const shapes = shapeKeys(seg, geometry);
-  const blockOf = new Int32Array(n * n);
-  const blockIndex = new Map<string, number>();
-  const representatives: [number, number][] = [];
-  for (let t = 0; t < n; t++) {
-    for (let q = 0; q < n; q++) {
-      const key = [
-        shapes[t],
-        shapes[q],
-        t === q ? "self" : "",
-        quantise(seg.start[3 * q] - seg.start[3 * t]),
-        quantise(seg.start[3 * q + 1] - seg.start[3 * t + 1]),
-        quantise(seg.start[3 * q + 2] - seg.start[3 * t + 2]),
-      ].join("|");
-      let block = blockIndex.get(key);
-      if (block === undefined) {
-        block = representatives.length;
-        blockIndex.set(key, block);
-        representatives.push([t, q]);
-      }
-      blockOf[t * n + q] = block;
+  const shapeIndex = new Map<string, number>();
+  const shapes = Int32Array.from(shapeKeys(seg, geometry), (key) => {
+    let id = shapeIndex.get(key);
+    if (id === undefined) {
+      id = shapeIndex.size;
+      shapeIndex.set(key, id);
     }
-  }
+    return id;
+  });
+  const offset = (test: number, source: number, c: number) => quantise(seg.start[3 * source + c] - seg.start[3 * test + c]);
+  /**
+   * Blocks for the pairs of segments: every ordered pair, or each unordered pair once with the shorter segment
+   * as the test segment. `plan` says whether the quadrature is for the source or its mirror image, `withImage`
+   * adds a plan for the image too.
+   */
+  const collect = (pairs: "unordered" | "ordered", plan: "direct" | "mirrored", withImage: boolean) => {
+    const index = new TupleIndex(pairs === "unordered" ? (n * (n + 1)) / 2 : n * n);
+    const tests: number[] = [];
+    const sources: number[] = [];
+    const blockOf = new Int32Array(n * n);
+    for (let t = 0; t < n; t++) {
+      for (let q = pairs === "unordered" ? t : 0; q < n; q++) {
+        const swap = pairs === "unordered" && geometry.length[q] < geometry.length[t];
+        const [test, source] = swap ? [q, t] : [t, q];
+        // Self pairs get shape −1 as source: skin effect and the self integral belong to them alone.
+        const block = index.idOf(shapes[test], t === q ? -1 : shapes[source], offset(test, source, 0), offset(test, source, 1), offset(test, source, 2), 0);
+        if (block === tests.length) {
+          tests.push(test);
+          sources.push(source);
+        }
+        blockOf[t * n + q] = block;
+        if (swap) swapped[t * n + q] = 1;
+      }
+    }
+    const set: BlockSet = {
+      count: tests.length,
+      test: Int32Array.from(tests),
+      source: Int32Array.from(sources),
+      plan: Int32Array.from(tests, (t, b) => planFor(t, sources[b], plan === "mirrored")),
+      imagePlan: withImage ? Int32Array.from(tests, (t, b) => planFor(t, sources[b], true)) : new Int32Array(0),
+    };
+    return { set, blockOf };
+  };
 
-  const count = representatives.length;
-  const pairs: PairPlans = {
-    blockOf,
-    blockCount: count,
-    test: new Int32Array(count),
-    source: new Int32Array(count),
-    freePlan: new Int32Array(count),
-    imagePlan: new Int32Array(withImage ? count : 0),
-    cosTheta: new Float64Array(real ? count : 0),
-    horizontal: new Float64Array(real ? 3 * count : 0),
+  // Pair blocks: free space, plus the image in a perfect ground.
+  const swapped = new Uint8Array(n * n);
+  const pairs = collect("unordered", "direct", seg.ground.kind === "perfect");
+  const pairOf = pairs.blockOf;
+
+  // Reflection blocks: real ground, every ordered pair, the source mirrored.
+  const real = seg.ground.kind === "real";
+  const reflections = real ? collect("ordered", "mirrored", false) : { set: emptySet(), blockOf: new Int32Array(0) };
+  const cosTheta = new Float64Array(reflections.set.count);
+  const horizontal = new Float64Array(3 * reflections.set.count);
+  for (let b = 0; b < reflections.set.count; b++) {
+    // Specular geometry from the middle of the image source to the middle of the test segment.
+    const test = reflections.set.test[b];
+    const source = reflections.set.source[b];
+    const mid = (i: number, c: number) => (seg.start[3 * i + c] + seg.end[3 * i + c]) / 2;
+    const dx = mid(test, 0) - mid(source, 0);
+    const dy = mid(test, 1) - mid(source, 1);
+    const dz = mid(test, 2) + mid(source, 2);
+    const across = Math.hypot(dx, dy);
+    cosTheta[b] = dz / Math.hypot(across, dz);
+    if (across > 1e-9 * dz) horizontal.set([-dy / across, dx / across, 0], 3 * b);
+  }
+  return {
+    pairOf,
+    swapped,
+    pair: pairs.set,
+    reflectionOf: reflections.blockOf,
+    reflection: reflections.set,
+    cosTheta,
+    horizontal,
     plans,
   };
-  representatives.forEach(([test, source], b) => {
-    const a2 = (seg.radius[test] ** 2 + seg.radius[source] ** 2) / 2;
-    pairs.test[b] = test;
-    pairs.source[b] = source;
-    pairs.freePlan[b] = planFor(test, source, false, a2);
-    if (withImage) pairs.imagePlan[b] = planFor(test, source, true, a2);
-    if (real) {
-      // Specular geometry from the middle of the image source to the middle of the test segment.
-      const mid = (array: Float64Array, i: number, c: number) => (array[3 * i + c] + seg.end[3 * i + c]) / 2;
-      const dx = mid(seg.start, test, 0) - mid(seg.start, source, 0);
-      const dy = mid(seg.start, test, 1) - mid(seg.start, source, 1);
-      const dz = mid(seg.start, test, 2) + mid(seg.start, source, 2);
-      const horizontal = Math.hypot(dx, dy);
-      pairs.cosTheta[b] = dz / Math.hypot(horizontal, dz);
-      if (horizontal > 1e-9 * dz) pairs.horizontal.set([-dy / horizontal, dx / horizontal, 0], 3 * b);
-    }
-  });
-  return pairs;
+}
+
+function emptySet(): BlockSet {
+  return { count: 0, test: new Int32Array(0), source: new Int32Array(0), plan: new Int32Array(0), imagePlan: new Int32Array(0) };
 }
 
 /** Segment the structure and set up everything that does not depend on frequency. Throws EngineInputError on bad geometry. */
 export function prepareStructure(structure: Structure, maxMHz: number): PreparedStructure {
   const seg = segmentStructure(structure, maxMHz);
   const geometry = buildGeometry(seg);
+  const segmentEnds = Array.from({ length: seg.count }, (_, i) => ({ start: point(seg.start, i), end: point(seg.end, i) }));
   const bases = buildBases(seg);
-  const pairs = buildPairs(seg, geometry, maxMHz);
-  return new Prepared(
-    seg.count,
-    maxMHz,
-    seg,
-    geometry,
-    bases.count,
-    bases.monoStart,
-    bases.monoBasis,
-    bases.monoSign,
-    bases.excitation,
-    pairs,
-  );
+  const blocks = buildBlocks(seg, geometry, maxMHz);
+  const work: Workspace = {
+    matrix: new Float64Array(2 * bases.count * bases.count),
+    pairValues: new Float64Array(8 * blocks.pair.count),
+    reflectionValues: new Float64Array(8 * blocks.reflection.count),
+    rhs: new Float64Array(2 * bases.count),
+  };
+  return new Prepared(seg.count, maxMHz, seg, geometry, bases, blocks, segmentEnds, work);
 }
 
 function asPrepared(prepared: PreparedStructure): Prepared {
@@ -289,113 +343,169 @@ function asPrepared(prepared: PreparedStructure): Prepared {
   return prepared;
 }
 
-/** Add the reaction z between monopoles (testMono, sourceMono) to every pair of basis functions using them. */
-function accumulate(prep: Prepared, matrix: Float64Array, testMono: number, sourceMono: number, zr: number, zi: number): void {
-  const { monoStart, monoBasis, monoSign, basisCount } = prep;
-  for (let a = monoStart[testMono]; a < monoStart[testMono + 1]; a++) {
-    const row = monoBasis[a] * basisCount;
-    const sa = monoSign[a];
-    for (let b = monoStart[sourceMono]; b < monoStart[sourceMono + 1]; b++) {
-      const s = sa * monoSign[b];
-      const mn = 2 * (row + monoBasis[b]);
-      matrix[mn] += s * zr;
-      matrix[mn + 1] += s * zi;
+const scratch = new Float64Array(16);
+const factors = new Float64Array(4);
+
+/** Pair blocks: 8 numbers each (see kernel.ts `react`), free space plus a perfect ground's image, with skin effect. */
+function computePairBlocks(prep: Prepared, k: number, mhz: number, phases: Float64Array): Float64Array {
+  const { seg, geometry } = prep;
+  const { pair, plans } = prep.blocks;
+  const values = prep.work.pairValues;
+  const perfect = seg.ground.kind === "perfect";
+  for (let b = 0; b < pair.count; b++) {
+    const t = pair.test[b];
+    const q = pair.source[b];
+    const a2 = squaredRadius(seg, t, q);
+    react(k, geometry, phases, t, q, false, a2, plans[pair.plan[b]], null, true, values, 8 * b);
+    if (perfect) {
+      // The image of a monopole in a perfect ground is the mirrored monopole with the opposite sign.
+      react(k, geometry, phases, t, q, true, a2, plans[pair.imagePlan[b]], null, true, scratch, 0);
+      for (let j = 0; j < 8; j++) values[8 * b + j] -= scratch[j];
+    }
+    if (t === q) addSkinEffect(seg, geometry, t, k, mhz, values, 8 * b);
+  }
+  return values;
+}
+
+/** Reflection blocks of a real ground: the perfect-ground image field with its vertical and horizontal parts scaled. */
+function computeReflectionBlocks(prep: Prepared, k: number, mhz: number, phases: Float64Array): Float64Array {
+  const { seg, geometry } = prep;
+  const { reflection, plans, cosTheta, horizontal } = prep.blocks;
+  const values = prep.work.reflectionValues;
+  if (seg.ground.kind !== "real") return values;
+  const [epsRe, epsIm] = groundPermittivity(seg.ground.relativePermittivity, seg.ground.conductivitySm, mhz);
+  for (let b = 0; b < reflection.count; b++) {
+    const t = reflection.test[b];
+    const q = reflection.source[b];
+    imageFactors(cosTheta[b], epsRe, epsIm, factors);
+    const [vr, vi, hr, hi] = factors;
+    const hx = horizontal[3 * b];
+    const hy = horizontal[3 * b + 1];
+    const hDotU = hx * geometry.dir[3 * t] + hy * geometry.dir[3 * t + 1];
+    const second: [number, number, number] | null = hDotU !== 0 ? [hx, hy, 0] : null;
+    react(k, geometry, phases, t, q, true, squaredRadius(seg, t, q), plans[reflection.plan[b]], second, false, scratch, 0);
+    const dr = (hr - vr) * hDotU;
+    const di = (hi - vi) * hDotU;
+    for (let j = 0; j < 8; j += 2) {
+      let zr = vr * scratch[j] - vi * scratch[j + 1];
+      let zi = vr * scratch[j + 1] + vi * scratch[j];
+      if (second !== null) {
+        zr += dr * scratch[j + 8] - di * scratch[j + 9];
+        zi += dr * scratch[j + 9] + di * scratch[j + 8];
+      }
+      // Minus: the image of a monopole is the mirrored monopole with the opposite sign.
+      values[8 * b + j] = -zr;
+      values[8 * b + j + 1] = -zi;
+    }
+  }
+  return values;
+}
+
+/** Skin-effect impedance on a segment's self block (before the common factor Z0 is applied). */
+function addSkinEffect(
+  seg: SegmentedStructure,
+  geometry: SegmentGeometry,
+  t: number,
+  k: number,
+  mhz: number,
+  blocks: Float64Array,
+  offset: number,
+): void {
+  const perMetre = wireImpedancePerMetre(seg.radius[t], seg.conductivity[t], mhz) / Z0;
+  if (perMetre === 0) return;
+  const [same, cross] = monopoleOverlaps(k, geometry.length[t]);
+  // Zs = R′(1 + j): equal real and imaginary parts; same monopole at 0–1 and 6–7, the two different ones at 2–5.
+  for (const j of [0, 1, 6, 7]) blocks[offset + j] += perMetre * same;
+  for (const j of [2, 3, 4, 5]) blocks[offset + j] += perMetre * cross;
+}
+
+/**
+ * Add weight·z to the upper triangle for every pair of basis functions (m, n)
+ * using monopoles (rowMono, colMono): at (min, max), twice on the diagonal,
+ * since the matrix is symmetric and the lower triangle is copied at the end.
+ */
+function scatterUpper(bases: Bases, matrix: Float64Array, rowMono: number, colMono: number, zr: number, zi: number, weight: number): void {
+  const { single, singleSign, monoStart, monoBasis, monoSign, count } = bases;
+  const row = single[rowMono];
+  const col = single[colMono];
+  if (row >= 0 && col >= 0) {
+    const s = (row === col ? 2 : 1) * weight * singleSign[rowMono] * singleSign[colMono];
+    const at = row <= col ? 2 * (row * count + col) : 2 * (col * count + row);
+    matrix[at] += s * zr;
+    matrix[at + 1] += s * zi;
+    return;
+  }
+  for (let a = monoStart[rowMono]; a < monoStart[rowMono + 1]; a++) {
+    const m = monoBasis[a];
+    for (let b = monoStart[colMono]; b < monoStart[colMono + 1]; b++) {
+      const n = monoBasis[b];
+      const s = (m === n ? 2 : 1) * weight * monoSign[a] * monoSign[b];
+      const at = m <= n ? 2 * (m * count + n) : 2 * (n * count + m);
+      matrix[at] += s * zr;
+      matrix[at + 1] += s * zi;
     }
   }
 }
 
-const scratch = new Float64Array(16);
-const factors = new Float64Array(4);
-
-/** The 2×2 monopole reactions of every block, 8 numbers each (see kernel.ts `react`), including ground and skin effect. */
-function computeBlocks(prep: Prepared, k: number, mhz: number): Float64Array {
-  const { seg, geometry, pairs } = prep;
-  const ground = seg.ground;
-  const [epsRe, epsIm] = ground.kind === "real" ? groundPermittivity(ground.relativePermittivity, ground.conductivitySm, mhz) : [0, 0];
-  const blocks = new Float64Array(8 * pairs.blockCount);
-  for (let b = 0; b < pairs.blockCount; b++) {
-    const t = pairs.test[b];
-    const q = pairs.source[b];
-    const a2 = (seg.radius[t] * seg.radius[t] + seg.radius[q] * seg.radius[q]) / 2;
-    const x1 = seg.start[3 * q];
-    const y1 = seg.start[3 * q + 1];
-    const z1 = seg.start[3 * q + 2];
-    const x2 = seg.end[3 * q];
-    const y2 = seg.end[3 * q + 1];
-    const z2 = seg.end[3 * q + 2];
-    react(k, geometry, t, x1, y1, z1, x2, y2, z2, a2, pairs.plans[pairs.freePlan[b]], null, scratch);
-    for (let j = 0; j < 8; j++) blocks[8 * b + j] = scratch[j];
-    if (ground.kind !== "free") {
-      // The image of a monopole in a perfect ground is the mirrored monopole with the opposite sign;
-      // a real ground scales its field's vertical and horizontal parts by the reflection factors.
-      let vr = 1;
-      let vi = 0;
-      let dr = 0;
-      let di = 0;
-      let second: [number, number, number] | null = null;
-      if (ground.kind === "real") {
-        imageFactors(pairs.cosTheta[b], epsRe, epsIm, factors);
-        const hx = pairs.horizontal[3 * b];
-        const hy = pairs.horizontal[3 * b + 1];
-        const hDotU = hx * geometry.dir[3 * t] + hy * geometry.dir[3 * t + 1];
-        vr = factors[0];
-        vi = factors[1];
-        if (hDotU !== 0) {
-          second = [hx, hy, 0];
-          dr = (factors[2] - vr) * hDotU;
-          di = (factors[3] - vi) * hDotU;
-        }
-      }
-      react(k, geometry, t, x1, y1, -z1, x2, y2, -z2, a2, pairs.plans[pairs.imagePlan[b]], second, scratch);
-      for (let j = 0; j < 8; j += 2) {
-        let zr = vr * scratch[j] - vi * scratch[j + 1];
-        let zi = vr * scratch[j + 1] + vi * scratch[j];
-        if (second !== null) {
-          zr += dr * scratch[j + 8] - di * scratch[j + 9];
-          zi += dr * scratch[j + 9] + di * scratch[j + 8];
-        }
-        blocks[8 * b + j] -= zr;
-        blocks[8 * b + j + 1] -= zi;
-      }
+/** Add z to the matrix entry (m, n) for every pair of basis functions using monopoles (rowMono, colMono). */
+function scatter(bases: Bases, matrix: Float64Array, rowMono: number, colMono: number, zr: number, zi: number): void {
+  const { monoStart, monoBasis, monoSign, count } = bases;
+  for (let a = monoStart[rowMono]; a < monoStart[rowMono + 1]; a++) {
+    const row = 2 * monoBasis[a] * count;
+    for (let b = monoStart[colMono]; b < monoStart[colMono + 1]; b++) {
+      const s = monoSign[a] * monoSign[b];
+      const at = row + 2 * monoBasis[b];
+      matrix[at] += s * zr;
+      matrix[at + 1] += s * zi;
     }
-    if (t === q) addSkinEffect(seg, geometry, t, k, mhz, blocks.subarray(8 * b, 8 * b + 8));
   }
-  const eta = Z0;
-  for (let j = 0; j < blocks.length; j++) blocks[j] *= eta;
-  return blocks;
 }
 
 function fillMatrix(prep: Prepared, mhz: number): Float64Array {
   const k = (2 * Math.PI * mhz * 1e6) / SPEED_OF_LIGHT;
-  const blocks = computeBlocks(prep, k, mhz);
   const n = prep.segmentCount;
-  const { blockOf } = prep.pairs;
-  const matrix = new Float64Array(2 * prep.basisCount * prep.basisCount);
+  const { bases } = prep;
+  const { pairOf, swapped, reflectionOf } = prep.blocks;
+  for (const plan of prep.blocks.plans) setPhases(plan, k);
+  const phases = lengthPhases(prep.geometry, k);
+  const matrix = prep.work.matrix;
+  matrix.fill(0);
+  const pairValues = computePairBlocks(prep, k, mhz, phases);
   for (let t = 0; t < n; t++) {
-    for (let q = 0; q < n; q++) {
-      const o = 8 * blockOf[t * n + q];
-      accumulate(prep, matrix, 2 * t + 1, 2 * q + 1, blocks[o], blocks[o + 1]);
-      accumulate(prep, matrix, 2 * t + 1, 2 * q, blocks[o + 2], blocks[o + 3]);
-      accumulate(prep, matrix, 2 * t, 2 * q + 1, blocks[o + 4], blocks[o + 5]);
-      accumulate(prep, matrix, 2 * t, 2 * q, blocks[o + 6], blocks[o + 7]);
+    for (let q = t; q < n; q++) {
+      const o = 8 * pairOf[t * n + q];
+      // A pair t ≠ q stands for both (t, q) and (q, t); a self pair's block already holds both orders.
+      const weight = t === q ? 0.5 : 1;
+      // Values are (test end, source end) = (2,2), (2,1), (1,2), (1,1); swapped blocks have q as the test segment.
+      const swap = swapped[t * n + q] === 1;
+      scatterUpper(bases, matrix, 2 * t + 1, 2 * q + 1, pairValues[o], pairValues[o + 1], weight);
+      scatterUpper(bases, matrix, 2 * t + 1, 2 * q, pairValues[o + (swap ? 4 : 2)], pairValues[o + (swap ? 5 : 3)], weight);
+      scatterUpper(bases, matrix, 2 * t, 2 * q + 1, pairValues[o + (swap ? 2 : 4)], pairValues[o + (swap ? 3 : 5)], weight);
+      scatterUpper(bases, matrix, 2 * t, 2 * q, pairValues[o + 6], pairValues[o + 7], weight);
     }
   }
+  const m = bases.count;
+  for (let row = 1; row < m; row++) {
+    for (let col = 0; col < row; col++) {
+      matrix[2 * (row * m + col)] = matrix[2 * (col * m + row)];
+      matrix[2 * (row * m + col) + 1] = matrix[2 * (col * m + row) + 1];
+    }
+  }
+  if (prep.seg.ground.kind === "real") {
+    const reflectionValues = computeReflectionBlocks(prep, k, mhz, phases);
+    for (let t = 0; t < n; t++) {
+      for (let q = 0; q < n; q++) {
+        const o = 8 * reflectionOf[t * n + q];
+        scatter(bases, matrix, 2 * t + 1, 2 * q + 1, reflectionValues[o], reflectionValues[o + 1]);
+        scatter(bases, matrix, 2 * t + 1, 2 * q, reflectionValues[o + 2], reflectionValues[o + 3]);
+        scatter(bases, matrix, 2 * t, 2 * q + 1, reflectionValues[o + 4], reflectionValues[o + 5]);
+        scatter(bases, matrix, 2 * t, 2 * q, reflectionValues[o + 6], reflectionValues[o + 7]);
+      }
+    }
+  }
+  const eta = Z0;
+  for (let j = 0; j < matrix.length; j++) matrix[j] *= eta;
   return matrix;
-}
-
-/** Skin-effect impedance on a segment's self block (before the common factor Z0 is applied). */
-function addSkinEffect(seg: SegmentedStructure, geometry: SegmentGeometry, t: number, k: number, mhz: number, block: Float64Array): void {
-  const perMetre = wireImpedancePerMetre(seg.radius[t], seg.conductivity[t], mhz) / Z0;
-  if (perMetre === 0) return;
-  const [same, cross] = monopoleOverlaps(k, geometry.length[t]);
-  block[0] += perMetre * same;
-  block[1] += perMetre * same;
-  block[6] += perMetre * same;
-  block[7] += perMetre * same;
-  block[2] += perMetre * cross;
-  block[3] += perMetre * cross;
-  block[4] += perMetre * cross;
-  block[5] += perMetre * cross;
 }
 
 function point(array: Float64Array, i: number): Vec3 {
@@ -408,21 +518,22 @@ export function solveAt(prepared: PreparedStructure, mhz: number): Solution {
   if (!(mhz > 0 && mhz <= prep.maxMHz * (1 + 1e-9))) {
     throw new RangeError(`solveAt: ${mhz} MHz is outside (0, ${prep.maxMHz}] MHz, the range the structure was prepared for`);
   }
-  const n = prep.basisCount;
-  const matrix = fillMatrix(prep, mhz);
-  const rhs = new Float64Array(2 * n);
-  for (let m = 0; m < n; m++) rhs[2 * m] = prep.excitation[m];
-  const x = luSolve(luFactor(matrix, n), rhs);
+  const { bases, seg, geometry, segmentEnds } = prep;
+  const n = bases.count;
+  const rhs = prep.work.rhs;
+  rhs.fill(0);
+  for (let m = 0; m < n; m++) rhs[2 * m] = bases.excitation[m];
+  const x = luSolve(luFactor(fillMatrix(prep, mhz), n), rhs);
 
   let feedRe = 0;
   let feedIm = 0;
   for (let m = 0; m < n; m++) {
-    feedRe += prep.excitation[m] * x[2 * m];
-    feedIm += prep.excitation[m] * x[2 * m + 1];
+    feedRe += bases.excitation[m] * x[2 * m];
+    feedIm += bases.excitation[m] * x[2 * m + 1];
   }
   const den = feedRe * feedRe + feedIm * feedIm;
   const k = (2 * Math.PI * mhz * 1e6) / SPEED_OF_LIGHT;
-  const { seg, geometry, monoStart, monoBasis, monoSign } = prep;
+  const { monoStart, monoBasis, monoSign } = bases;
   const segments: SegmentCurrent[] = [];
   for (let s = 0; s < seg.count; s++) {
     let re = 0;
@@ -437,12 +548,7 @@ export function solveAt(prepared: PreparedStructure, mhz: number): Solution {
     }
     // A monopole's current at the middle of its segment is 1/(2·cos(k·d/2)) of its node value.
     const middle = 1 / (2 * Math.cos((k * geometry.length[s]) / 2));
-    segments.push({
-      wire: seg.wire[s],
-      start: point(seg.start, s),
-      end: point(seg.end, s),
-      current: { re: re * middle, im: im * middle },
-    });
+    segments.push({ wire: seg.wire[s], ...segmentEnds[s], current: { re: re * middle, im: im * middle } });
   }
   return {
     mhz,

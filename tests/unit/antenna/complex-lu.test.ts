@@ -27,7 +27,7 @@ function solveWithMathjs(a: Float64Array, b: Float64Array, n: number): Complex[]
 
 describe("complex LU with partial pivoting", () => {
   // Source: mathjs 15 `lusolve` on complex matrices (a general-purpose reference library)
-  it.each([1, 2, 3, 7, 16, 40])("matches mathjs lusolve on random %i×%i systems", (n) => {
+  it.each([1, 2, 3, 7, 16, 40])("matches mathjs lusolve on random n×n systems, n = %i", (n) => {
     for (let seed = 1; seed <= 5; seed++) {
       const { a, b } = randomSystem(n, seed * 97 + n);
       const expected = solveWithMathjs(a, b, n);
