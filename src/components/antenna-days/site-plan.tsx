@@ -213,7 +213,7 @@ export function SitePlan({ site, slots, editable }: { site: PlanSite; slots: Pla
       <p aria-live="polite" className="mt-2 min-h-6 text-sm text-slate-700">
         {announcement}
       </p>
-      <PlanLegend />
+      <PlanLegend editable={editable} />
       {editable && (
         <MoveForm
           key={selected ? `${selected.slot.id}:${selected.position.join(",")}` : "none"}
@@ -227,7 +227,7 @@ export function SitePlan({ site, slots, editable }: { site: PlanSite; slots: Pla
           }}
         />
       )}
-      <FindingList findings={findings} hazards={site.hazards} />
+      {slots.length > 0 && <FindingList findings={findings} hazards={site.hazards} />}
     </div>
   );
 }
@@ -391,7 +391,7 @@ function SlotDrawing({ slot, position, footprint, flip, text, state, selected, e
   );
 }
 
-function PlanLegend() {
+function PlanLegend({ editable }: { editable: boolean }) {
   const item = (swatch: ReactNode, label: string) => (
     <li className="flex items-center gap-2">
       <svg width="28" height="14" aria-hidden="true">
@@ -402,7 +402,7 @@ function PlanLegend() {
   );
   return (
     <ul aria-label="Plan legend" className="mt-1 flex flex-wrap gap-x-5 gap-y-1 text-sm text-slate-700">
-      {item(<circle cx="14" cy="7" r="5" fill={COLOURS.mast} />, "Mast (drag or use arrow keys)")}
+      {item(<circle cx="14" cy="7" r="5" fill={COLOURS.mast} />, editable ? "Mast (drag it, or Tab to it and use the arrow keys)" : "Mast")}
       {item(<line x1="0" y1="7" x2="28" y2="7" stroke={COLOURS.wire} strokeWidth="3" />, "Antenna wire or radial")}
       {item(<line x1="0" y1="7" x2="28" y2="7" stroke={COLOURS.caution} strokeOpacity="0.35" strokeWidth="10" />, "RF-exposure zone")}
       {item(<line x1="0" y1="7" x2="28" y2="7" stroke={COLOURS.faint} strokeWidth="2" strokeDasharray="6 4" />, "Fall zone")}
