@@ -61,6 +61,9 @@ export function ClubCalendar({ timeZone }: { timeZone: string }) {
           buttons={{ dayGridMonth: { text: "Month" }, listMonth: { text: "List" } }}
           timeZone={timeZone}
           firstDay={1}
+          eventTimeFormat={{ hour: "2-digit", minute: "2-digit", hour12: false }}
+          listItemEventTitleClass="guyline-calendar-title"
+          listItemEventInnerClass="guyline-calendar-title"
           height="auto"
           events={events}
           noEventsText="Nothing on the calendar this month."

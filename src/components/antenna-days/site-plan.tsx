@@ -170,7 +170,7 @@ export function SitePlan({ site, slots, editable }: { site: PlanSite; slots: Pla
         <svg
           ref={svgRef}
           viewBox={`${-margin} ${-margin} ${W + 2 * margin} ${D + 2 * margin}`}
-          className="block h-auto w-full touch-none select-none"
+          className="block h-auto w-full select-none"
           role="group"
           aria-labelledby={titleId}
           data-width-m={W}
@@ -370,13 +370,14 @@ function SlotDrawing({ slot, position, footprint, flip, text, state, selected, e
         const [x2, y2] = flip(wire.to);
         return <line key={index} x1={x1} y1={y1} x2={x2} y2={y2} stroke={COLOURS.wire} strokeWidth={3} strokeLinecap="round" vectorEffect="non-scaling-stroke" aria-hidden="true" />;
       })}
+      {/* Only a draggable mast takes touches from the page; elsewhere the plan scrolls with the page. */}
       <g
         role={editable ? "button" : "img"}
         tabIndex={0}
         aria-label={label}
         aria-pressed={editable ? selected : undefined}
         data-slot-id={slot.id}
-        className={editable ? "cursor-grab focus:outline-none" : "focus:outline-none"}
+        className={editable ? "cursor-grab touch-none focus:outline-none" : "focus:outline-none"}
         onPointerDown={onPointerDown}
         onKeyDown={onKeyDown}
         onFocus={onFocus}
