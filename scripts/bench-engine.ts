@@ -6,11 +6,12 @@
  * of the structure; with nec2c installed, nec2c on the same geometry and
  * segmentation, and the ratio (target ≤ 1.0).
  *
- * The machine may be busy, so the engine and nec2c run in turns and the
- * figures are medians. Times are CPU times (what each program itself spends;
- * nec2c's own "TOTAL RUN TIME" counts in 10 ms steps, so it runs ten sweeps per
- * process and the figure is divided by ten); wall-clock medians are shown too,
- * nec2c's including its process start and output file.
+ * The machine may be busy, so the engine and nec2c run in turns, in rounds
+ * over all cases, after a warm-up, and the figures are medians. Times are
+ * CPU times, what each program itself spends (nec2c's own "TOTAL RUN TIME"
+ * counts in 10 ms steps, so it runs ten sweeps per process and the figure is
+ * divided by ten); wall-clock medians are shown too, nec2c's including its
+ * process start and output file.
  */
 import { prepareStructure, solveSweep } from "../src/lib/antenna/solver";
 import { CROSS_CHECK_CASES, necDeck, nec2cInstalled, runNec2c, sweepFrequencies, type CrossCheckCase } from "./lib/nec2c";
@@ -70,26 +71,29 @@ function main(): void {
   const withNec2c = nec2cInstalled();
   console.log(`Antenna engine benchmark: medians of ${RUNS} runs${withNec2c ? ", the engine and nec2c in turns" : " (nec2c not installed)"}`);
   // Warm-up: let the JIT compile the hot paths before anything is timed (its threads count as CPU time).
-  for (let run = 0; run < 5; run++) for (const { case: c } of CASES) timeEngine(c);
-  for (const { label, case: c } of CASES) {
+  for (let run = 0; run < 10; run++) for (const { case: c } of CASES) timeEngine(c);
+  // Rounds over all cases, so that a change in the machine's load falls on every case alike.
+  const ours = CASES.map((): Timing[] => []);
+  const theirs = CASES.map((): Timing[] => []);
+  for (let run = 0; run < RUNS; run++) {
+    CASES.forEach(({ case: c }, i) => {
+      ours[i].push(timeEngine(c));
+      if (withNec2c) theirs[i].push(timeNec2c(c));
+    });
+  }
+  CASES.forEach(({ label, case: c }, i) => {
     const segments = prepareStructure(c.structure, Math.max(...sweepFrequencies(c.sweep))).segmentCount;
-    const ours: Timing[] = [];
-    const theirs: Timing[] = [];
-    for (let run = 0; run < RUNS; run++) {
-      ours.push(timeEngine(c));
-      if (withNec2c) theirs.push(timeNec2c(c));
-    }
-    const oursCpu = median(ours.map((t) => t.cpuMs));
-    const oursWall = median(ours.map((t) => t.wallMs));
+    const oursCpu = median(ours[i].map((t) => t.cpuMs));
+    const oursWall = median(ours[i].map((t) => t.wallMs));
     console.log(`${label} (${segments} segments)`);
     console.log(`  engine: ${oursCpu.toFixed(1)} ms CPU, ${oursWall.toFixed(1)} ms wall`);
     if (withNec2c) {
-      const necCpu = median(theirs.map((t) => t.cpuMs));
-      const necWall = median(theirs.map((t) => t.wallMs));
+      const necCpu = median(theirs[i].map((t) => t.cpuMs));
+      const necWall = median(theirs[i].map((t) => t.wallMs));
       console.log(`  nec2c:  ${necCpu.toFixed(1)} ms CPU, ${necWall.toFixed(1)} ms wall (one process per sweep)`);
       console.log(`  ratio engine/nec2c: ${(oursCpu / necCpu).toFixed(2)} CPU, ${(oursWall / necWall).toFixed(2)} wall (target ≤ 1.0)`);
     }
-  }
+  });
   // (c) a dipole plan recompute (target < 20 ms median): Engine B's section.
   printPlanBench(benchPlanRecompute(RUNS));
 }

@@ -53,7 +53,7 @@ const structureShape = {
 };
 
 function checkFeedWire(value: { wires: unknown[]; feed: { wire: number } }, ctx: z.RefinementCtx): void {
-  if (value.feed.wire >= value.wires.length) {
+  if (value.wires.length > 0 && value.feed.wire >= value.wires.length) {
     ctx.addIssue({
       code: "custom",
       path: ["feed", "wire"],

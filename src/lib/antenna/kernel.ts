@@ -16,12 +16,13 @@
  * The point charge at the node end, I(node)·∇g, is left out: the two halves of
  * every basis function carry equal and opposite charges at their shared node,
  * so those terms cancel exactly in every basis function (also at bends and
- * junctions, and with a basis completed by its image in a perfect ground).
+ * junctions, and with a basis completed by its image in a perfect ground),
+ * as long as both halves' fields at a test point use the same radius, which
+ * is why the kernel takes the test wire's radius.
  *
- * Thin-wire reduced kernel: the source current is a filament on the axis and
- * the field is taken at one wire radius from it, i.e. ρ² → ρ² + a². For two
- * wires of different radii the root mean square of the radii is used, which
- * keeps the matrix symmetric and equals the radius when both are the same.
+ * Thin-wire reduced kernel: the source current is a filament on its axis and
+ * the field is taken on the test wire's surface, i.e. ρ² → ρ² + a² with a the
+ * test wire's radius (the caller passes a²).
  *
  * The test integral along the other segment uses Gauss–Legendre quadrature;
  * where the test segment passes near an end of the source (self terms,
@@ -31,6 +32,7 @@
 import { gaussRule } from "./quadrature";
 import { sincos } from "./sincos";
 
+const phase = new Float64Array(2);
 const phase1 = new Float64Array(2);
 const phase2 = new Float64Array(2);
 
@@ -59,8 +61,6 @@ function testPoints(s: Float64Array, w: Float64Array): TestPoints {
   return { s, w, sinKs: new Float64Array(s.length), cosKs: new Float64Array(s.length) };
 }
 
-const phase = new Float64Array(2);
-
 /** Set sin(k·s) and cos(k·s) of every point for wavenumber k. */
 export function setPhases(points: TestPoints, k: number): void {
   for (let i = 0; i < points.s.length; i++) {
@@ -74,11 +74,12 @@ export function setPhases(points: TestPoints, k: number): void {
  * Gauss–Legendre points on a piece near a source end: more when the piece spans
  * many decades of distance (t-range of the sinh map) or much phase.
  */
-export function nearOrder(tRange: number, phase: number): number {
-  return Math.min(32, Math.max(8, Math.ceil(4 + tRange + 8 * phase)));
+function nearOrder(tRange: number, phaseSpan: number): number {
+  return Math.min(32, Math.max(8, Math.ceil(4 + tRange + 8 * phaseSpan)));
 }
+
 /** A source end within this many test-segment lengths of the test segment is treated as near. */
-export const NEAR_FACTOR = 1.5;
+const NEAR_FACTOR = 1.5;
 
 /** Gauss–Legendre points mapped to [0, length]. */
 export function plainPoints(order: number, length: number): TestPoints {
@@ -140,10 +141,16 @@ export function nearPoints(
     if (gap < NEAR_FACTOR * d) near.push({ sStar, clamped, h: Math.sqrt(perp2 + a2), gap });
   }
   if (near.length === 0) return null;
-  near.sort((p, q) => p.clamped - q.clamped || p.gap - q.gap);
-  // Boundaries: the test ends, each near end's foot, and midway between feet; every piece touches one foot.
+  near.sort((p, q) => p.clamped - q.clamped);
+  // Ends whose feet coincide (up to rounding) share one foot: the nearest of them decides the map.
+  const feet: NearEnd[] = [];
+  for (const end of near) {
+    const last = feet[feet.length - 1];
+    if (last === undefined || end.clamped - last.clamped > 1e-9 * d) feet.push(end);
+    else if (end.gap < last.gap) feet[feet.length - 1] = end;
+  }
+  // Boundaries: the test ends, each foot, and midway between feet; every piece touches one foot.
   const pieces: { from: number; to: number; end: NearEnd }[] = [];
-  const feet = near.filter((n, i) => i === 0 || n.clamped - near[i - 1].clamped > 1e-12 * d);
   let cursor = 0;
   feet.forEach((foot, i) => {
     if (foot.clamped > cursor) pieces.push({ from: cursor, to: foot.clamped, end: foot });
@@ -187,16 +194,18 @@ export function lengthPhases(geometry: SegmentGeometry, k: number): Float64Array
  * `t` and the two monopoles of source segment `q` (or of its mirror image in
  * z = 0), with `points` phased by setPhases and `lengthPhases` for the same k.
  *
- * With `reciprocal`, each reaction also gets the term that makes it
+ * With `chargeTerm`, each reaction also gets the term that makes it
  * symmetric in test and source: adding back the source's node charge Q and
  * integrating its part by parts, −∫ I·E_Q ds = −Φ_Q(test node) + ∫ I′·Φ_Q ds.
  * The first part is symmetric already; the second, (jη/4πk)·∫ I′_test·g(node) ds,
- * is what is added. Both parts cancel over whole basis functions (the two
- * halves of a source basis have equal and opposite node charges), so the
- * basis matrix is unchanged, but a pair of segments is then integrated once
- * and used both ways. This holds for free space and a perfect ground, whose
- * image field is a true field; not under the reflection-coefficient
- * approximation, which scales the image field's parts separately.
+ * is what is added. It depends on the source only through its node, so it
+ * cancels over every whole source basis function (whose two halves share the
+ * node with opposite signs), provided all reactions with that test monopole
+ * include it; the basis matrix is unchanged, but a pair of segments with a
+ * symmetric kernel is then integrated once and used both ways. This holds for
+ * free space and a perfect ground, whose image field is a true field; not
+ * under the reflection-coefficient approximation, which scales the image
+ * field's parts separately.
  *
  * out[offset..offset+7] receives, as (re, im) pairs, the reactions for (test end, source end)
  * = (2,2), (2,1), (1,2), (1,1), where "end 2" is the monopole whose node is the
@@ -214,7 +223,7 @@ export function react(
   a2: number,
   points: TestPoints,
   second: readonly [number, number, number] | null,
-  reciprocal: boolean,
+  chargeTerm: boolean,
   out: Float64Array,
   offset: number,
 ): void {
@@ -318,7 +327,7 @@ export function react(
     abI += wA * f2I;
     aaR += wA * f1R;
     aaI += wA * f1I;
-    if (reciprocal) {
+    if (chargeTerm) {
       // I′ of the test monopoles: k·cos(k·s′)/sin(kd), s′ from each one's zero end (k is in the factor below).
       const cB = w * cosKs;
       const cA = w * (cosTest * cosKs + sinTest * sinKs);

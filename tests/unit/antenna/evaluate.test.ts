@@ -73,6 +73,10 @@ describe("evaluate (engine-contract.md §1)", () => {
   ])("refuses %s", (_, input, expected) => {
     expect(problemsOf(input)).toContain(expected);
   });
+
+  it("names only the missing wires when there are none, not the feed", () => {
+    expect(problemsOf(request({ wires: [] }))).toEqual(["wires: must list at least one wire"]);
+  });
 });
 
 describe("the command line (npm run --silent antenna:evaluate)", () => {

@@ -52,6 +52,6 @@ describe("cross-check against nec2c (issue 3)", () => {
       expect(Math.abs(result.shift)).toBeLessThanOrEqual(TOLERANCES.shift);
       expect(result.worstR, "worst |ΔR|/R").toBeLessThanOrEqual(TOLERANCES.r);
       expect(result.worstXShare, "worst |ΔX|/(3 Ω + 3 % |Z|)").toBeLessThanOrEqual(1);
-    });
+    }, 60_000);
   }
 });

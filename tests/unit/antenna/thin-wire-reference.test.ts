@@ -130,7 +130,7 @@ describe("horizontal half-wave dipole over a perfect ground", () => {
     expect(resistances[dip]).toBeLessThan(57.8 * 1.03);
     expect(heights[dip]).toBeGreaterThanOrEqual(0.56);
     expect(heights[dip]).toBeLessThanOrEqual(0.64);
-  });
+  }, 60_000);
 
   // Source: reference-data.md §3, after J. D. Kraus, Antennas, 2nd ed. 1988 (from memory): over real ground R does not fall to zero at low heights, because ground loss adds to it
   it("keeps a much larger resistance at 0.05 λ over average real ground than over a perfect ground", () => {
@@ -176,7 +176,7 @@ describe("resonant length of a centre-fed dipole against length-to-diameter rati
   ])("l/d = %i gives K = L_res/(λ/2) = %f within ±1.5 %%", (ratio, k, segments) => {
     const measured = resonantLength(ratio, segments) / 0.5;
     expect(Math.abs(measured / k - 1)).toBeLessThan(0.015);
-  });
+  }, 60_000);
 });
 
 describe("end impedance of a half-wave wire", () => {
@@ -196,7 +196,7 @@ describe("end impedance of a half-wave wire", () => {
     const peak = Math.max(...sweep);
     expect(peak).toBeGreaterThan(1500);
     expect(peak).toBeLessThan(5000);
-  });
+  }, 60_000);
 });
 
 describe("skin-effect loss", () => {
