@@ -73,13 +73,6 @@ export function runEvaluate(request: unknown): Promise<EvaluateResponse> {
   return runInWorker("evaluate", request) as Promise<EvaluateResponse>;
 }
 
-/** Ends the engine's workers (scripts and tests that want to exit at once). */
-export async function closeEngine(): Promise<void> {
-  const pool = globalForEngine.guylineEnginePool;
-  globalForEngine.guylineEnginePool = undefined;
-  await pool?.close();
-}
-
 /** The engine's `path: message` lines as the HTTP API's problems. */
 export function engineProblems(error: EngineInputError): Problem[] {
   return error.problems.map((line) => {
