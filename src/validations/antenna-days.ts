@@ -45,7 +45,10 @@ export const copyDaySchema = z.object(copyFields).refine((day) => day.endsAtLoca
 export const copyDayFormSchema = z.object({ ...copyFields, sourceId: z.uuid() }).refine((day) => day.endsAtLocal > day.startsAtLocal, endsAfterStart);
 
 export const calendarRangeSchema = z
-  .object({ from: z.iso.datetime({ offset: true, message: "from: an ISO date-time" }).or(z.iso.date()), to: z.iso.datetime({ offset: true }).or(z.iso.date()) })
+  .object({
+    from: z.union([z.iso.datetime({ offset: true }), z.iso.date()], { error: "must be an ISO date or date-time" }),
+    to: z.union([z.iso.datetime({ offset: true }), z.iso.date()], { error: "must be an ISO date or date-time" }),
+  })
   .refine((range) => new Date(range.to) > new Date(range.from), { path: ["to"], message: "must come after from" })
   .refine((range) => new Date(range.to).getTime() - new Date(range.from).getTime() <= 400 * 24 * 3600 * 1000, { path: ["to"], message: "ask for at most 400 days at once" });
 

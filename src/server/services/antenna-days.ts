@@ -95,14 +95,6 @@ export async function findEditableDay(actor: Actor, dayId: string, executor: Exe
   return day;
 }
 
-/** Raises the day's sequence after a change to it (or to what its calendar entry shows). */
-export async function touchDay(executor: Executor, dayId: string): Promise<void> {
-  await executor
-    .update(antennaDays)
-    .set({ sequence: sql`${antennaDays.sequence} + 1`, updatedAt: new Date() })
-    .where(eq(antennaDays.id, dayId));
-}
-
 export async function listDays(actor: Actor, range: { from?: Date; to?: Date } = {}): Promise<DayDto[]> {
   if (!can(actor, "antennaDays.view")) throw forbidden();
   const { timeZone } = await getClubSettings();
