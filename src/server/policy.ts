@@ -86,3 +86,9 @@ export function canCancelFor(actor: Actor | null, ownerId: string, managerPermis
 export function canMentorSessions(person: Pick<Actor, "isMentor" | "role" | "confirmed">): boolean {
   return person.isMentor && person.confirmed && person.role !== "newcomer";
 }
+
+/** A plan in the plan library is changed or deleted by the person who saved it, or a coordinator. */
+export function canEditLibraryPlan(actor: Actor | null, createdBy: string | null): boolean {
+  if (!can(actor, "plans.save")) return false;
+  return actor!.role === "coordinator" || actor!.id === createdBy;
+}

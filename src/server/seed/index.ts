@@ -4,7 +4,9 @@
 import { sql } from "drizzle-orm";
 import { hashPassword } from "@/server/services/accounts";
 import { db } from "@/server/db";
+import { seedAntennaDays } from "./antenna-days";
 import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
+import { seedPlanLibrary } from "./plans";
 
 export async function seedDemo(): Promise<void> {
   const realAccounts = await db().execute<{ n: number }>(
@@ -16,5 +18,8 @@ export async function seedDemo(): Promise<void> {
   const passwordHash = await hashPassword(demoPassword);
   await db().transaction(async (tx) => {
     await seedClubAndPeople(tx, passwordHash);
+    const settings = await tx.query.clubSettings.findFirst();
+    await seedAntennaDays(tx, { timeZone: settings!.timeZone, ituRegion: settings!.ituRegion });
+    await seedPlanLibrary(tx, { ituRegion: settings!.ituRegion });
   });
 }

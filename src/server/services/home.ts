@@ -4,6 +4,10 @@ import { and, count, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { users } from "@/server/db/schema";
 import { can, type Actor } from "@/server/policy";
+import { getClubSettings } from "@/server/services/accounts";
+import { listDays } from "@/server/services/antenna-days";
+import { listMyShifts } from "@/server/services/shifts";
+import { formatInZone, formatRangeInZone } from "@/lib/time";
 
 export interface NextThing {
   title: string;
@@ -28,7 +32,33 @@ async function membersAwaitingConfirmation(actor: Actor): Promise<HomeSection | 
   };
 }
 
+async function myNextShifts(actor: Actor): Promise<HomeSection | null> {
+  if (!can(actor, "shifts.signUp")) return null;
+  const [shifts, { timeZone }] = await Promise.all([listMyShifts(actor, { from: new Date() }), getClubSettings()]);
+  return {
+    heading: "Your next shifts",
+    emptyText: "You have no shifts coming up. Antenna days list the shifts that need operators.",
+    things: shifts.slice(0, 5).map((shift) => ({
+      title: `${shift.slotName}, ${formatRangeInZone(shift.startsAt, shift.endsAt, timeZone)}`,
+      detail: shift.dayTitle,
+      href: `/antenna-days/${shift.dayId}#slot-${shift.slotId}`,
+    })),
+  };
+}
+
+async function draftAntennaDays(actor: Actor): Promise<HomeSection | null> {
+  if (!can(actor, "antennaDays.viewDrafts")) return null;
+  const [days, { timeZone }] = await Promise.all([listDays(actor), getClubSettings()]);
+  return {
+    heading: "Antenna days still in draft",
+    emptyText: "No drafts: every planned antenna day is published.",
+    things: days
+      .filter((day) => day.status === "draft")
+      .map((day) => ({ title: day.title, detail: `${formatInZone(day.startsAt, timeZone, "date")} · not yet published`, href: `/antenna-days/${day.id}` })),
+  };
+}
+
 export async function whatNeedsMeNext(actor: Actor): Promise<HomeSection[]> {
-  const sections = await Promise.all([membersAwaitingConfirmation(actor)]);
+  const sections = await Promise.all([membersAwaitingConfirmation(actor), myNextShifts(actor), draftAntennaDays(actor)]);
   return sections.filter((section): section is HomeSection => section !== null);
 }

@@ -3,7 +3,7 @@
 // Source: Guyline product brief (shared/design/product.md), "Roles".
 import { describe, expect, it } from "vitest";
 import { roles, type Role } from "@/lib/roles";
-import { can, canCoSignLoan, canUploadSweep, loanNeedsCoSign, permissions, type Actor, type Permission } from "@/server/policy";
+import { can, canCoSignLoan, canEditLibraryPlan, canUploadSweep, loanNeedsCoSign, permissions, type Actor, type Permission } from "@/server/policy";
 
 const C = "coordinator", S = "steward", M = "member", N = "newcomer";
 
@@ -78,5 +78,18 @@ describe("policy: rules about a resource", () => {
     expect(canUploadSweep(actor(M), true)).toBe(true);
     expect(canUploadSweep(actor(M), false)).toBe(false);
     expect(canUploadSweep(actor(N), true)).toBe(false);
+  });
+});
+
+describe("policy: the plan library", () => {
+  it("lets the person who saved a plan, or a coordinator, change or delete it", () => {
+    expect(canEditLibraryPlan(actor(M), "id-member")).toBe(true);
+    expect(canEditLibraryPlan(actor(M), "someone-else")).toBe(false);
+    expect(canEditLibraryPlan(actor(S), "someone-else")).toBe(false);
+    expect(canEditLibraryPlan(actor(C), "someone-else")).toBe(true);
+    expect(canEditLibraryPlan(actor(C), null)).toBe(true);
+    expect(canEditLibraryPlan(actor(N), "id-newcomer")).toBe(false);
+    expect(canEditLibraryPlan(actor(M, { confirmed: false }), "id-member")).toBe(false);
+    expect(canEditLibraryPlan(null, "id-member")).toBe(false);
   });
 });

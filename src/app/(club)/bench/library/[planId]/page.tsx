@@ -1,0 +1,57 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { PlanParameters } from "@/components/antenna-plan/plan-parameters";
+import { ButtonLink } from "@/components/ui/button";
+import { Card, EmptyState, PageHeader } from "@/components/ui/notice";
+import { loadOrNotFound } from "@/server/page-data";
+import { getLibraryPlan } from "@/server/services/plans";
+import { requirePageViewer } from "@/server/session";
+import { LibraryPlanEditor } from "./library-plan-editor";
+
+export const metadata: Metadata = { title: "Library plan" };
+
+export default async function LibraryPlanPage({ params }: { params: Promise<{ planId: string }> }) {
+  const { actor, member } = await requirePageViewer("plans.view");
+  const { planId } = await params;
+  const plan = await loadOrNotFound(planId, (id) => getLibraryPlan(actor, id));
+  return (
+    <>
+      <PageHeader title={plan.name}>
+        <ButtonLink href={`/bench?plan=${plan.id}`}>Open on the antenna bench</ButtonLink>
+        <ButtonLink href="/bench/library" variant="secondary">
+          Plan library
+        </ButtonLink>
+      </PageHeader>
+      <div className="grid gap-6 lg:grid-cols-2">
+        <div>
+          <Card title="The plan">
+            <PlanParameters parameters={plan.parameters} units={member.units} />
+            {plan.notes && <p className="mt-4 whitespace-pre-line text-slate-800">{plan.notes}</p>}
+            <p className="mt-4 text-sm text-slate-700">
+              Saved by {plan.createdBy?.name ?? "a former member"} on {plan.createdAt.slice(0, 10)}; last changed {plan.updatedAt.slice(0, 10)}.
+            </p>
+          </Card>
+          {plan.canEdit && (
+            <Card title="Name and notes">
+              <LibraryPlanEditor id={plan.id} name={plan.name} notes={plan.notes} inUse={plan.usageCount > 0} />
+            </Card>
+          )}
+        </div>
+        <Card title="Where it is used">
+          {plan.usage.length === 0 ? (
+            <EmptyState title="No station slot uses this plan yet">A coordinator can start a slot&apos;s plan from it on the slot&apos;s plan page.</EmptyState>
+          ) : (
+            <ul className="space-y-2" aria-label="Station slots using this plan">
+              {plan.usage.map((use) => (
+                <li key={use.slotId}>
+                  <Link href={`/antenna-days/${use.dayId}/slots/${use.slotId}/plan`}>{use.slotName}</Link> on{" "}
+                  <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({use.dayStartsAt.slice(0, 10)}, {use.dayStatus})
+                </li>
+              ))}
+            </ul>
+          )}
+        </Card>
+      </div>
+    </>
+  );
+}

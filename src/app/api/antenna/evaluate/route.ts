@@ -1,0 +1,7 @@
+import { runEvaluate } from "@/server/engine/run";
+import { engineRoute } from "@/server/engine/route";
+
+export const dynamic = "force-dynamic";
+
+/** The engine contract's `evaluate` call (README, "Antenna engine"). */
+export const POST = engineRoute(runEvaluate);
