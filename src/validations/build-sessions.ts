@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { planRequestSchema } from "@/lib/antenna";
+import { planRequestSchema, type PlanRequest } from "@/lib/antenna";
 
 /** A wall-clock time in the club's time zone, as a datetime-local input gives it. */
 export const wallTimeField = z
@@ -51,7 +51,12 @@ export const buildSessionPatchSchema = z
 export type BuildSessionPatch = z.infer<typeof buildSessionPatchSchema>;
 
 export const buildSessionCancelSchema = z.object({
-  reason: z.string().trim().max(500, "Use at most 500 characters.").nullable().default(null),
+  reason: z
+    .string()
+    .trim()
+    .max(500, "Use at most 500 characters.")
+    .optional()
+    .transform((value) => value || null),
 });
 
 export const sessionIdParams = z.object({ id: z.uuid("Unknown build session.") });
@@ -60,3 +65,69 @@ export const signupTargetSchema = z.object({
   /** Coordinators may cancel someone else's place; everyone else acts for themselves. */
   userId: z.uuid("Unknown person.").optional(),
 });
+
+// The session form: one flat set of plan fields for the single-band families (the fan dipole
+// goes through the API), reduced to the chosen family's own parameters and then checked with
+// the engine's schema, so form errors land on `plan.<field>` like the API's.
+export const formFamilies = ["dipole", "inverted-v", "vertical", "end-fed", "off-centre-fed"] as const;
+
+/** Transmitter assumed for a build session's plan: it only sets the RF-exposure figures. */
+export const buildSessionTransmitter = { powerW: 100, mode: "ssb" } as const;
+
+const formPlanSchema = z
+  .object({
+    family: z.enum(formFamilies, { message: "Choose an antenna." }),
+    region: z.coerce.number(),
+    band: z.string().min(1, "Choose a band."),
+    heightM: z.coerce.number({ message: "Enter a height in metres." }),
+    wireDiameterMm: z.coerce.number({ message: "Enter the wire diameter in millimetres." }),
+    ground: z.string(),
+    feedline: z.object({ type: z.string(), lengthM: z.coerce.number({ message: "Enter a length in metres." }) }),
+    includedAngleDeg: z.coerce.number(),
+    radials: z.coerce.number(),
+    radialDroopDeg: z.coerce.number(),
+    unun: z.string(),
+    feedPosition: z.coerce.number(),
+  })
+  .transform(({ includedAngleDeg, radials, radialDroopDeg, unun, feedPosition, ...common }, context) => {
+    const own = { "inverted-v": { includedAngleDeg }, vertical: { radials, radialDroopDeg }, "end-fed": { unun }, "off-centre-fed": { feedPosition }, dipole: {} }[common.family];
+    const result = planRequestSchema.safeParse({ ...common, ...own, transmitter: buildSessionTransmitter });
+    if (result.success) return result.data;
+    for (const issue of result.error.issues) context.addIssue({ code: "custom", message: issue.message, path: issue.path });
+    return z.NEVER;
+  });
+
+export const buildSessionFormSchema = buildSessionSchema.extend({
+  plan: formPlanSchema,
+  mentorIds: z.preprocess((value) => (Array.isArray(value) ? value : value ? [value] : []), buildSessionFields.mentorIds),
+  notes: z.string().trim().max(2000, "Use at most 2000 characters.").transform((value) => value || null),
+});
+export type BuildSessionFormValues = z.input<typeof buildSessionFormSchema>;
+
+export const editBuildSessionFormSchema = buildSessionFormSchema.extend({ id: z.uuid("Unknown build session.") });
+
+/** Defaults of the session form's plan fields; a stored plan fills in its own values. */
+export function formPlanValues(region: number, plan?: PlanRequest): BuildSessionFormValues["plan"] {
+  const defaults = {
+    family: "dipole" as (typeof formFamilies)[number],
+    region,
+    band: "20m",
+    heightM: 8,
+    wireDiameterMm: 1.6,
+    ground: "average",
+    feedline: { type: "rg58", lengthM: 15 },
+    includedAngleDeg: 120,
+    radials: 4,
+    radialDroopDeg: 30,
+    unun: "49:1",
+    feedPosition: 0.33,
+  };
+  if (!plan || plan.family === "fan-dipole") return defaults;
+  return {
+    ...defaults,
+    ...plan,
+    band: plan.band ?? defaults.band,
+    ground: typeof plan.ground === "string" ? plan.ground : defaults.ground,
+    feedline: { ...plan.feedline },
+  } as BuildSessionFormValues["plan"];
+}
