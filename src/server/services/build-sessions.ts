@@ -13,7 +13,7 @@ import type { ReminderWindow } from "@/lib/mail/reminder-clock";
 import { formatRangeInZone, instantToWallTime, wallTimeToInstant } from "@/lib/time";
 import { serverEnv } from "@/env";
 import { db, type Executor, type Transaction } from "@/server/db";
-import { buildSessionMentors, buildSessionSignups, buildSessions, users, type OutboxAttachment } from "@/server/db/schema";
+import { buildSessionMentors, buildSessionSignups, buildSessions, clubSettings, users, type OutboxAttachment } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { enqueueMail } from "@/server/mail/outbox";
 import { can, canCancelFor, canMentorSessions, type Actor } from "@/server/policy";
@@ -204,8 +204,15 @@ function calendarEventOf(row: SessionRow, mentors: PersonRef[]): CalendarEvent {
   );
 }
 
+/** The club's name and zone through the caller's executor (inside a transaction, never a second connection). */
+async function clubOf(executor: Executor) {
+  const [club] = await executor.select({ clubName: clubSettings.clubName, timeZone: clubSettings.timeZone }).from(clubSettings);
+  return club;
+}
+
 async function sessionIcs(executor: Executor, row: SessionRow): Promise<OutboxAttachment> {
-  const [mentors, club] = await Promise.all([mentorsOf(executor, [row.id]), getClubSettings()]);
+  const mentors = await mentorsOf(executor, [row.id]);
+  const club = await clubOf(executor);
   return {
     filename: icsFileName(row.title),
     contentType: "text/calendar; charset=utf-8",
