@@ -24,7 +24,7 @@ export async function startWorkerProcess(port = smtpPort): Promise<WorkerProcess
   const output: string[] = [];
   const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
   await new Promise<void>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`The worker did not start:\n${output.join("")}`)), 20_000);
+    const timer = setTimeout(() => reject(new Error(`The worker did not start:\n${output.join("")}`)), 60_000);
     const onData = (chunk: Buffer) => {
       output.push(chunk.toString());
       if (chunk.toString().includes("worker running")) {

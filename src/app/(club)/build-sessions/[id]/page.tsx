@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CancelSessionForm, PlaceControls } from "@/components/build-sessions/place-controls";
 import { PlacesBadge } from "@/components/build-sessions/places";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink, buttonClass } from "@/components/ui/button";
 import { Card, Notice, PageHeader } from "@/components/ui/notice";
 import { localCodesPrevail } from "@/lib/build-sessions/safety";
 import { formatRangeInZone } from "@/lib/time";
@@ -32,9 +32,10 @@ export default async function BuildSessionPage({ params }: { params: Promise<{ i
   return (
     <>
       <PageHeader title={session.title}>
-        <ButtonLink variant="secondary" href={`/api/build-sessions/${session.id}/ics`} prefetch={false}>
+        {/* A plain link: the file is a download, not a page. */}
+        <a className={buttonClass("secondary")} href={`/api/build-sessions/${session.id}/ics`} download>
           Add to my calendar (.ics)
-        </ButtonLink>
+        </a>
         {manages && !cancelled && (
           <ButtonLink variant="secondary" href={`/build-sessions/${session.id}/edit`}>
             Change
