@@ -122,8 +122,11 @@ describe("a worker killed in the middle of a batch", () => {
     await worker.stop();
     await capture!.close();
     capture = null;
-    // A slow SMTP server that records each message it accepts by its Message-ID.
+    // An SMTP server that takes its time to accept, records each message it accepted by its
+    // Message-ID, and kills the worker while it waits for the acceptance of the fourth message.
     const accepted: string[] = [];
+    let received = 0;
+    let killWorker: () => Promise<void> = async () => {};
     const slow = new SMTPServer({
       disabledCommands: ["STARTTLS", "AUTH"],
       authOptional: true,
@@ -132,9 +135,14 @@ describe("a worker killed in the middle of a batch", () => {
         const chunks: Buffer[] = [];
         stream.on("data", (chunk: Buffer) => chunks.push(chunk));
         stream.on("end", async () => {
+          received += 1;
+          if (received === 4) {
+            // The sender dies before it hears "250 OK": the message is not accepted.
+            await killWorker();
+            return callback(new Error("The sender went away."));
+          }
           await new Promise((resolve) => setTimeout(resolve, 300));
-          const parsed = await simpleParser(Buffer.concat(chunks));
-          accepted.push(parsed.messageId ?? "");
+          accepted.push((await simpleParser(Buffer.concat(chunks))).messageId ?? "");
           callback();
         });
       },
@@ -142,7 +150,6 @@ describe("a worker killed in the middle of a batch", () => {
     await new Promise<void>((resolve) => slow.listen(smtpPort, "127.0.0.1", () => resolve()));
     try {
       const people = await Promise.all(Array.from({ length: 12 }, () => createPerson("member")));
-      const ids: string[] = [];
       await db().transaction(async (tx) => {
         for (const person of people) {
           await enqueueMail(tx, {
@@ -153,13 +160,14 @@ describe("a worker killed in the middle of a batch", () => {
           });
         }
       });
-      for (const row of await outboxFor(people.map((person) => person.id))) ids.push(row.id);
+      const ids = (await outboxFor(people.map((person) => person.id))).map((row) => row.id);
 
       const first = await startWorkerProcess();
-      await waitFor("a few messages", async () => accepted.length >= 3);
-      await first.stop("SIGKILL");
-      const afterKill = accepted.length;
-      expect(afterKill).toBeLessThan(12);
+      killWorker = () => first.stop("SIGKILL");
+      await waitFor("the worker to be killed mid-send", async () => first.child.signalCode === "SIGKILL", 60_000);
+      expect(accepted.length).toBe(3);
+      const [inFlight] = await db().select().from(mailOutbox).where(inArray(mailOutbox.id, ids)).then((rows) => rows.filter((row) => row.status === "pending"));
+      expect(inFlight).toBeTruthy();
 
       worker = await startWorkerProcess();
       const rows = await waitFor(
@@ -168,7 +176,7 @@ describe("a worker killed in the middle of a batch", () => {
           const current = await db().select().from(mailOutbox).where(inArray(mailOutbox.id, ids));
           return current.every((row) => row.status === "sent") && current;
         },
-        90_000,
+        120_000,
       );
       expect(rows).toHaveLength(12);
       const ours = accepted.filter((messageId) => ids.some((id) => messageId.includes(id)));
@@ -178,5 +186,5 @@ describe("a worker killed in the middle of a batch", () => {
       await new Promise<void>((resolve) => slow.close(() => resolve()));
     }
     capture = await startCaptureServer(smtpPort);
-  }, 150_000);
+  }, 180_000);
 });

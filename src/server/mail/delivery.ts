@@ -2,7 +2,9 @@
 // to sent in a transaction that stays open while the SMTP server takes the message, and
 // commits only once it has. A failure rolls the mark back (the job is retried); a second try
 // at a message already sent finds nothing pending and sends nothing; a worker killed mid-send
-// leaves the row pending for the retry.
+// leaves the row pending for the retry. SMTP has no two-phase commit: the one moment a repeat
+// remains possible is a crash between the server's "250 OK" and the commit, and the fixed
+// Message-ID lets the receiving side recognise that repeat.
 import type { Transporter } from "nodemailer";
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/server/db";
