@@ -25,9 +25,13 @@ ensure_build
 # The local mail server catches every message (see the development inbox); the worker sends
 # queued mail and runs reminders. Both stop when this script stops.
 start_mail_services demo "$GUYLINE_SMTP_DEMO_PORT"
-trap 'stop_mail_services demo' EXIT
+app_pid=""
+trap '[ -n "$app_pid" ] && kill "$app_pid" 2>/dev/null; stop_mail_services demo' EXIT
 trap 'exit 130' INT TERM
 
 echo "Guyline is starting on $NEXTAUTH_URL (demo accounts are in README.md)."
 echo "Mail goes to the local mail server on port $GUYLINE_SMTP_DEMO_PORT: read it at $NEXTAUTH_URL/dev/inbox as a coordinator."
-npx next start -p "$GUYLINE_APP_PORT"
+# In the background and waited for, so that a TERM to this script stops everything at once.
+./node_modules/.bin/next start -p "$GUYLINE_APP_PORT" &
+app_pid=$!
+wait "$app_pid"

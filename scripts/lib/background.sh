@@ -2,11 +2,6 @@
 # worker. Sourced, not run. Each service keeps its pid in .data/<name>.pid, so a later run stops
 # one left over from an earlier run before starting it again.
 
-# TypeScript entry points run in one node process (no wrapper), so the pid is the service's.
-ts_node() {
-  node --import tsx "$@"
-}
-
 stop_background() {
   local pidfile=".data/$1.pid" pid
   [ -f "$pidfile" ] || return 0
@@ -19,7 +14,8 @@ stop_background() {
   rm -f "$pidfile"
 }
 
-#   start_background NAME LOG_FILE COMMAND...
+#   start_background NAME LOG_FILE COMMAND...   COMMAND must be a program, not a shell
+#   function (a function would run in a subshell, and the pid would be the subshell's).
 start_background() {
   local name="$1" log="$2"; shift 2
   stop_background "$name"
@@ -44,9 +40,10 @@ wait_for_port() {
 #   current DATABASE_URL, NEXTAUTH_URL and NEXTAUTH_SECRET.
 start_mail_services() {
   local prefix="$1" port="$2"
-  start_background "$prefix-mail-server" ".data/$prefix-mail-server.log" ts_node scripts/mail-server.ts "$port"
+  # TypeScript entry points run in one node process (tsx as a loader, no wrapper process).
+  start_background "$prefix-mail-server" ".data/$prefix-mail-server.log" node --import tsx scripts/mail-server.ts "$port"
   wait_for_port "$port" "local mail server" ".data/$prefix-mail-server.log"
-  SMTP_HOST=127.0.0.1 SMTP_PORT="$port" start_background "$prefix-worker" ".data/$prefix-worker.log" ts_node scripts/worker.ts
+  SMTP_HOST=127.0.0.1 SMTP_PORT="$port" start_background "$prefix-worker" ".data/$prefix-worker.log" node --import tsx scripts/worker.ts
 }
 
 stop_mail_services() {
