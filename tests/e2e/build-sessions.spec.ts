@@ -56,7 +56,8 @@ test("a newcomer joins a full session's waitlist, is promoted when a place frees
     await expect(inbox.getByRole("link", { name: subject })).toBeVisible({ timeout: 1000 });
   }).toPass({ timeout: 30_000 });
   await inbox.getByRole("link", { name: subject }).click();
-  await expect(inbox.getByText(demoAccounts.newcomer)).toBeVisible();
+  await expect(inbox.getByRole("heading", { name: subject })).toBeVisible();
+  await expect(inbox.getByText(demoAccounts.newcomer, { exact: true })).toBeVisible();
   const text = (await inbox.getByTestId("text-part").textContent()) ?? "";
   expect(text).toContain(`/build-sessions/${sessionId}`);
   await expect(inbox.frameLocator("iframe").getByRole("link", { name: "See the session" })).toBeVisible();
