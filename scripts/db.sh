@@ -79,7 +79,6 @@ init_cluster() {
   rm -f "$pwfile"
   {
     echo "listen_addresses = '127.0.0.1'"
-    echo "port = $port"
     echo "unix_socket_directories = '$DATA_DIR'"
     echo "max_connections = 200"
     if [ "$instance" = "test" ]; then
@@ -95,7 +94,8 @@ start() {
   setup_paths
   if is_running; then echo "PostgreSQL ($instance) already running on 127.0.0.1:$port"; return; fi
   [ -f "$DATA_DIR/PG_VERSION" ] || init_cluster
-  as_server_user "$PG_BIN/pg_ctl" -D "$DATA_DIR" -l "$LOG_FILE" -w -t 60 start >/dev/null
+  # The port is given at each start (not written into the cluster), so it follows ports.sh.
+  as_server_user "$PG_BIN/pg_ctl" -D "$DATA_DIR" -l "$LOG_FILE" -o "-p $port" -w -t 60 start >/dev/null
   if ! PGPASSWORD="$db_password" psql -h 127.0.0.1 -p "$port" -U "$db_user" -d postgres -tAc \
       "select 1 from pg_database where datname = '$database'" | grep -q 1; then
     PGPASSWORD="$db_password" psql -h 127.0.0.1 -p "$port" -U "$db_user" -d postgres -qc "create database $database"

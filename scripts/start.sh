@@ -5,6 +5,7 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/ports.sh
 source scripts/lib/setup.sh
+source scripts/lib/background.sh
 
 ensure_node
 ensure_debian_packages psql:postgresql
@@ -21,5 +22,16 @@ npm run --silent db:migrate
 npm run --silent db:seed
 ensure_build
 
+# The local mail server catches every message (see the development inbox); the worker sends
+# queued mail and runs reminders. Both stop when this script stops.
+start_mail_services demo "$GUYLINE_SMTP_DEMO_PORT"
+app_pid=""
+trap '[ -n "$app_pid" ] && kill "$app_pid" 2>/dev/null; stop_mail_services demo' EXIT
+trap 'exit 130' INT TERM
+
 echo "Guyline is starting on $NEXTAUTH_URL (demo accounts are in README.md)."
-exec npx next start -p "$GUYLINE_APP_PORT"
+echo "Mail goes to the local mail server on port $GUYLINE_SMTP_DEMO_PORT: read it at $NEXTAUTH_URL/dev/inbox as a coordinator."
+# In the background and waited for, so that a TERM to this script stops everything at once.
+./node_modules/.bin/next start -p "$GUYLINE_APP_PORT" &
+app_pid=$!
+wait "$app_pid"

@@ -6,6 +6,7 @@ set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/ports.sh
 source scripts/lib/setup.sh
+source scripts/lib/background.sh
 set -e
 
 ensure_node
@@ -46,7 +47,12 @@ step "integration tests" env DATABASE_URL="$db_root/guyline_test" NEXTAUTH_URL="
 e2e_env=(DATABASE_URL="$db_root/guyline_e2e" NEXTAUTH_URL="http://localhost:$GUYLINE_TEST_APP_PORT")
 step "browser set-up" env "${e2e_env[@]}" bash -c 'npm run --silent db:migrate && npm run --silent db:seed'
 step "production build" env NODE_ENV=production bash -c 'source scripts/lib/setup.sh && ensure_build'
+# The browser tests read the mail the app sends: the local mail server and the worker run
+# against the e2e database while they do.
+step "mail services" env "${e2e_env[@]}" bash -c 'source scripts/lib/ports.sh && source scripts/lib/background.sh && start_mail_services e2e "$GUYLINE_SMTP_TEST_PORT"'
+trap 'stop_mail_services e2e' EXIT
 step "browser tests" env "${e2e_env[@]}" PLAYWRIGHT_JSON_OUTPUT_NAME="$reports/e2e.json" npx playwright test --reporter=list,json
+stop_mail_services e2e
 
 echo
 [ ${#failed_steps[@]} -gt 0 ] && echo "Failed steps: ${failed_steps[*]}"

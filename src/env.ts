@@ -12,6 +12,15 @@ const serverEnvSchema = z.object({
     .enum(["on", "off"])
     .default("off")
     .transform((value) => value === "on"),
+  // Outgoing mail (read by the worker, scripts/worker.ts). Development, demo and tests point
+  // these at the local capture server (scripts/mail-server.ts); production at the club's
+  // SMTP service. Port 465 means TLS from the start; other ports upgrade with STARTTLS.
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
+  SMTP_USER: z.string().min(1).optional(),
+  SMTP_PASSWORD: z.string().min(1).optional(),
+  /** The sender, e.g. "Guyline <guyline@club.example>"; defaults to guyline@ the served host. */
+  MAIL_FROM: z.string().min(3).optional(),
 });
 
 export type ServerEnv = z.infer<typeof serverEnvSchema>;
@@ -28,4 +37,28 @@ export function serverEnv(): ServerEnv {
     cached = parsed.data;
   }
   return cached;
+}
+
+export interface SmtpSettings {
+  host: string;
+  port: number;
+  auth?: { user: string; pass: string };
+  from: string;
+}
+
+/** What the worker needs to send mail; refuses to guess a server. */
+export function smtpSettings(): SmtpSettings {
+  const env = serverEnv();
+  if (!env.SMTP_HOST) {
+    throw new Error("Guyline's environment is incomplete:\nSMTP_HOST: the worker needs an SMTP server to send mail (scripts/start.sh starts a local one).");
+  }
+  if (!!env.SMTP_USER !== !!env.SMTP_PASSWORD) {
+    throw new Error("Guyline's environment is incomplete:\nSMTP_USER and SMTP_PASSWORD: give both or neither.");
+  }
+  return {
+    host: env.SMTP_HOST,
+    port: env.SMTP_PORT,
+    ...(env.SMTP_USER && env.SMTP_PASSWORD ? { auth: { user: env.SMTP_USER, pass: env.SMTP_PASSWORD } } : {}),
+    from: env.MAIL_FROM ?? `Guyline <guyline@${new URL(env.NEXTAUTH_URL).hostname}>`,
+  };
 }

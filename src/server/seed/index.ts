@@ -5,6 +5,7 @@ import { sql } from "drizzle-orm";
 import { hashPassword } from "@/server/services/accounts";
 import { db } from "@/server/db";
 import { seedAntennaDays } from "./antenna-days";
+import { seedBuildSessions } from "./build-sessions";
 import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
 import { seedPlanLibrary } from "./plans";
 
@@ -21,5 +22,6 @@ export async function seedDemo(): Promise<void> {
     const settings = await tx.query.clubSettings.findFirst();
     await seedAntennaDays(tx, { timeZone: settings!.timeZone, ituRegion: settings!.ituRegion });
     await seedPlanLibrary(tx, { ituRegion: settings!.ituRegion });
+    await seedBuildSessions(tx);
   });
 }

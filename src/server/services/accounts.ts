@@ -8,7 +8,8 @@ import { clubSettings, invitations, users, type UserRow } from "@/server/db/sche
 import { PublicError, badInput, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, type Actor } from "@/server/policy";
 import { clearRateLimit, hitRateLimit, refundRateLimit, type RateLimitRule } from "@/server/rate-limit";
-import type { Role } from "@/lib/roles";
+import { roleLabels, type Role } from "@/lib/roles";
+import { enqueueMail } from "@/server/mail/outbox";
 
 const BCRYPT_COST = 12;
 const INVITATION_DAYS = 14;
@@ -133,14 +134,26 @@ export async function listPendingInvitations(actor: Actor): Promise<PendingInvit
   return rows.map((row) => ({ id: row.id, name: row.name, email: row.email, role: row.role, expiresAt: row.expiresAt.toISOString() }));
 }
 
-/** Creates an invitation and returns the secret token for its link (shown once, e-mailed). */
+/** Creates an invitation, e-mails its link, and returns the secret token (shown once to the coordinator too). */
 export async function inviteMember(actor: Actor, input: { name: string; email: string; role: Role; isMentor: boolean }): Promise<{ token: string; expiresAt: Date }> {
   if (!can(actor, "members.manage")) throw forbidden();
   const existing = await db().query.users.findFirst({ where: eq(users.email, input.email) });
   if (existing) throw badInput("email", "This person already has an account.");
   const token = randomBytes(32).toString("base64url");
   const expiresAt = new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
-  await db().insert(invitations).values({ ...input, tokenHash: hashToken(token), invitedBy: actor.id, expiresAt });
+  await db().transaction(async (tx) => {
+    const [inviter] = await tx.select({ name: users.name }).from(users).where(eq(users.id, actor.id));
+    const [invitation] = await tx
+      .insert(invitations)
+      .values({ ...input, tokenHash: hashToken(token), invitedBy: actor.id, expiresAt })
+      .returning({ id: invitations.id });
+    await enqueueMail(tx, {
+      template: "invitation",
+      to: { email: input.email, name: input.name },
+      key: `invitation:${invitation.id}`,
+      data: { inviterName: inviter.name, roleLabel: roleLabels[input.role], isMentor: input.isMentor, acceptPath: `/invite/${token}`, expiresAt: expiresAt.toISOString() },
+    });
+  });
   return { token, expiresAt };
 }
 

@@ -8,6 +8,7 @@ import { getClubSettings } from "@/server/services/accounts";
 import { listDays } from "@/server/services/antenna-days";
 import { listMyShifts } from "@/server/services/shifts";
 import { formatInZone, formatRangeInZone } from "@/lib/time";
+import { myNextBuildSession, sessionsIMentor } from "@/server/services/build-sessions";
 
 export interface NextThing {
   title: string;
@@ -46,6 +47,33 @@ async function myNextShifts(actor: Actor): Promise<HomeSection | null> {
   };
 }
 
+async function nextBuildSession(actor: Actor): Promise<HomeSection | null> {
+  if (!can(actor, "buildSessions.view")) return null;
+  const [session, club] = await Promise.all([myNextBuildSession(actor), getClubSettings()]);
+  const place = session?.myPlace?.status === "waitlisted" ? `number ${session.myPlace.position} on the waitlist` : "you have a place";
+  return {
+    heading: "Your next build session",
+    emptyText: "You are not signed up for a build session. Find one under Build sessions.",
+    things: session
+      ? [{ title: session.title, detail: `${formatRangeInZone(session.startsAt, session.endsAt, club.timeZone)} · ${session.place} · ${place}`, href: `/build-sessions/${session.id}` }]
+      : [],
+  };
+}
+
+async function buildSessionsIMentor(actor: Actor): Promise<HomeSection | null> {
+  if (!actor.isMentor || !can(actor, "buildSessions.view")) return null;
+  const [sessions, club] = await Promise.all([sessionsIMentor(actor), getClubSettings()]);
+  return {
+    heading: "Build sessions you mentor",
+    emptyText: "You are not mentoring an upcoming build session.",
+    things: sessions.map((session) => ({
+      title: session.title,
+      detail: `${formatRangeInZone(session.startsAt, session.endsAt, club.timeZone)} · ${session.taken} of ${session.capacity} places taken${session.waitlisted > 0 ? `, ${session.waitlisted} waiting` : ""}`,
+      href: `/build-sessions/${session.id}`,
+    })),
+  };
+}
+
 async function draftAntennaDays(actor: Actor): Promise<HomeSection | null> {
   if (!can(actor, "antennaDays.viewDrafts")) return null;
   const [days, { timeZone }] = await Promise.all([listDays(actor), getClubSettings()]);
@@ -59,6 +87,12 @@ async function draftAntennaDays(actor: Actor): Promise<HomeSection | null> {
 }
 
 export async function whatNeedsMeNext(actor: Actor): Promise<HomeSection[]> {
-  const sections = await Promise.all([membersAwaitingConfirmation(actor), myNextShifts(actor), draftAntennaDays(actor)]);
+  const sections = await Promise.all([
+    membersAwaitingConfirmation(actor),
+    myNextShifts(actor),
+    nextBuildSession(actor),
+    buildSessionsIMentor(actor),
+    draftAntennaDays(actor),
+  ]);
   return sections.filter((section): section is HomeSection => section !== null);
 }

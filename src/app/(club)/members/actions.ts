@@ -8,7 +8,7 @@ import { inviteSchema, memberChangeSchema } from "@/validations/accounts";
 export const inviteMemberAction = signedInAction(inviteSchema, async (actor, input) => {
   const { token } = await inviteMember(actor, input);
   revalidatePath("/members");
-  return { ok: true, message: `${input.name} is invited.`, data: { invitationPath: `/invite/${token}` } };
+  return { ok: true, message: `${input.name} is invited; the invitation is on its way by e-mail.`, data: { invitationPath: `/invite/${token}` } };
 });
 
 export const changeMemberAction = signedInAction(memberChangeSchema, async (actor, input) => {

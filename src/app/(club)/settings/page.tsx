@@ -1,8 +1,13 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { Card, PageHeader } from "@/components/ui/notice";
+import { feedStatus } from "@/server/calendar/feeds";
 import { can } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
+import { devInboxOpen } from "@/server/services/dev-inbox";
+import { getMailChoices } from "@/server/services/mail-preferences";
 import { requirePageViewer } from "@/server/session";
+import { CalendarFeedControls, MailChoicesForm } from "./mail-settings";
 import { ClubSettingsForm, PasswordForm, ProfileForm } from "./settings-forms";
 
 export const metadata: Metadata = { title: "Settings" };
@@ -10,6 +15,7 @@ export const metadata: Metadata = { title: "Settings" };
 export default async function SettingsPage() {
   const { actor, member } = await requirePageViewer("account.edit");
   const club = can(actor, "club.configure") ? await getClubSettings() : null;
+  const [mailChoices, feed] = await Promise.all([getMailChoices(actor), feedStatus(actor)]);
   return (
     <>
       <PageHeader title="Settings" />
@@ -22,15 +28,31 @@ export default async function SettingsPage() {
           <Card title="Password">
             <PasswordForm />
           </Card>
-        </div>
-        {club && (
-          <Card title="The club">
-            <ClubSettingsForm
-              defaults={{ clubName: club.clubName, ituRegion: club.ituRegion, timeZone: club.timeZone, defaultUnits: club.defaultUnits, joinCode: club.joinCode }}
-              timeZones={Intl.supportedValuesOf("timeZone")}
-            />
+          <Card title="E-mail">
+            <MailChoicesForm defaults={mailChoices} />
           </Card>
-        )}
+        </div>
+        <div>
+          <Card title="Calendar feed">
+            <p className="mb-3 text-slate-700">One private address for your calendar app with the build sessions you take part in or mentor, kept up to date as they change.</p>
+            {actor.confirmed ? <CalendarFeedControls active={feed.active} since={feed.createdAt} /> : <p>Your account must be confirmed first.</p>}
+          </Card>
+          {devInboxOpen(actor) && (
+            <Card title="Development inbox">
+              <p>
+                This deployment catches its e-mail locally. <Link href="/dev/inbox">Open the development inbox</Link>.
+              </p>
+            </Card>
+          )}
+          {club && (
+            <Card title="The club">
+              <ClubSettingsForm
+                defaults={{ clubName: club.clubName, ituRegion: club.ituRegion, timeZone: club.timeZone, defaultUnits: club.defaultUnits, joinCode: club.joinCode }}
+                timeZones={Intl.supportedValuesOf("timeZone")}
+              />
+            </Card>
+          )}
+        </div>
       </div>
     </>
   );

@@ -42,6 +42,9 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
         {formState.isSubmitting ? "Signing in…" : "Sign in"}
       </Button>
       <p className="mt-4 text-sm text-slate-700">
+        <Link href="/reset-password">Forgot your password?</Link>
+      </p>
+      <p className="mt-2 text-sm text-slate-700">
         New to the club? <Link href="/join">Join with the club&apos;s join code</Link>.
       </p>
     </form>

@@ -3,3 +3,5 @@ export * from "./users";
 export * from "./club";
 export * from "./plans";
 export * from "./antenna-days";
+export * from "./mail";
+export * from "./build-sessions";

@@ -1,0 +1,94 @@
+// Mail in integration tests: the real local mail server (in this process), the real worker (a
+// child process, so it can be stopped and killed like in production), and waiting for both.
+import { spawn, type ChildProcess } from "node:child_process";
+import { existsSync, readdirSync } from "node:fs";
+import { join } from "node:path";
+import { and, eq, inArray } from "drizzle-orm";
+import { db } from "@/server/db";
+import { capturedMail, mailOutbox } from "@/server/db/schema";
+
+export const smtpPort = Number(process.env.GUYLINE_SMTP_INTEGRATION_PORT ?? 2725);
+
+export interface WorkerProcess {
+  child: ChildProcess;
+  output: string[];
+  stop(signal?: NodeJS.Signals): Promise<void>;
+}
+
+/** Starts scripts/worker.ts against the test database and the given SMTP port; resolves once it runs. */
+export async function startWorkerProcess(port = smtpPort): Promise<WorkerProcess> {
+  const child = spawn(process.execPath, ["--import", "tsx", "scripts/worker.ts"], {
+    env: { ...process.env, SMTP_HOST: "127.0.0.1", SMTP_PORT: String(port) },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  const output: string[] = [];
+  const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
+  await new Promise<void>((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`The worker did not start:\n${output.join("")}`)), 60_000);
+    const onData = (chunk: Buffer) => {
+      output.push(chunk.toString());
+      if (chunk.toString().includes("worker running")) {
+        clearTimeout(timer);
+        resolve();
+      }
+    };
+    child.stdout!.on("data", onData);
+    child.stderr!.on("data", (chunk: Buffer) => output.push(chunk.toString()));
+    child.once("exit", (code) => {
+      clearTimeout(timer);
+      reject(new Error(`The worker exited (${code}):\n${output.join("")}`));
+    });
+  });
+  return {
+    child,
+    output,
+    async stop(signal: NodeJS.Signals = "SIGTERM") {
+      if (child.exitCode === null && child.signalCode === null) child.kill(signal);
+      await exited;
+    },
+  };
+}
+
+export async function waitFor<T>(what: string, probe: () => Promise<T | null | undefined | false>, timeoutMs = 30_000): Promise<T> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const value = await probe();
+    if (value) return value;
+    if (Date.now() > deadline) throw new Error(`Timed out waiting for ${what}`);
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+}
+
+export async function capturedFor(address: string) {
+  return db()
+    .select()
+    .from(capturedMail)
+    .where(eq(capturedMail.envelopeTo, [address]))
+    .orderBy(capturedMail.receivedAt);
+}
+
+export async function outboxFor(userIds: string[], template?: string) {
+  return db()
+    .select()
+    .from(mailOutbox)
+    .where(and(inArray(mailOutbox.userId, userIds), template ? eq(mailOutbox.template, template) : undefined));
+}
+
+/**
+ * Whether a Guyline URL path is served by a page or route handler in src/app: static
+ * segments match folders, dynamic ones match [param] folders, (group) folders are skipped.
+ */
+export function resolvesToRoute(pathname: string): boolean {
+  const walk = (dir: string, segments: string[]): boolean => {
+    const entries = readdirSync(dir, { withFileTypes: true }).filter((entry) => entry.isDirectory());
+    for (const group of entries.filter((entry) => /^\(.+\)$/.test(entry.name))) {
+      if (walk(join(dir, group.name), segments)) return true;
+    }
+    if (segments.length === 0) return existsSync(join(dir, "page.tsx")) || existsSync(join(dir, "route.ts"));
+    const [head, ...rest] = segments;
+    const exact = entries.find((entry) => entry.name === head);
+    if (exact && walk(join(dir, exact.name), rest)) return true;
+    return entries.some((entry) => /^\[[^.\]]+\]$/.test(entry.name) && walk(join(dir, entry.name), rest));
+  };
+  return walk(join(process.cwd(), "src/app"), pathname.split("/").filter(Boolean));
+}
