@@ -1,3 +1,5 @@
 // The whole schema, split by area. drizzle.config.ts and the client read it from here.
 export * from "./users";
 export * from "./club";
+export * from "./files";
+export * from "./gear";
