@@ -97,8 +97,6 @@ export const gearItemSchema = z.discriminatedUnion(
 export type GearItemInput = z.output<typeof gearItemSchema>;
 export type GearItemFormValues = z.input<typeof gearItemSchema>;
 
-export const gearItemUpdateSchema = z.object({ id: z.uuid(), item: gearItemSchema });
-
 export const retireSchema = z.object({ id: z.uuid(), reason: z.string().trim().min(3, "Say why the item is retired.").max(500) });
 
 const boolFlag = z.enum(["true", "false"]).transform((value) => value === "true");
@@ -124,3 +122,16 @@ export const importSchema = z.object({
   mode: z.enum(["preview", "commit"]),
   csv: z.string().max(1_000_000, "The file is too large to import at once (1 MB at most)."),
 });
+
+/** PATCH /api/gear/:id: any item fields; merged onto the item, then checked as a whole. */
+export const gearItemPatchSchema = z.record(z.string(), z.unknown());
+
+export const itemIdParams = z.object({ id: z.uuid("That item was not found.") });
+export const itemFileParams = z.object({ id: z.uuid("That item was not found."), fileId: z.uuid("That file was not found.") });
+export const retireQuerySchema = z.object({ reason: retireSchema.shape.reason });
+
+export const uploadFieldsSchema = z.discriminatedUnion("purpose", [
+  z.object({ purpose: z.literal("photo") }),
+  z.object({ purpose: z.literal("manual") }),
+  z.object({ purpose: z.literal("return"), bookingId: z.uuid("Say which loan the return photo belongs to.") }),
+]);

@@ -4,6 +4,7 @@
 import { sql } from "drizzle-orm";
 import { hashPassword } from "@/server/services/accounts";
 import { db } from "@/server/db";
+import { seedGear } from "./gear";
 import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
 
 export async function seedDemo(): Promise<void> {
@@ -16,5 +17,6 @@ export async function seedDemo(): Promise<void> {
   const passwordHash = await hashPassword(demoPassword);
   await db().transaction(async (tx) => {
     await seedClubAndPeople(tx, passwordHash);
+    await seedGear(tx);
   });
 }

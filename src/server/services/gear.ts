@@ -7,7 +7,7 @@ import { can, canReturnLoan, type Actor } from "@/server/policy";
 import { findStoredFile, storeFile, uploadRules } from "@/server/storage/files";
 import { getClubSettings } from "@/server/services/accounts";
 import { defaultApprovalRule } from "@/lib/gear/kinds";
-import { readGearCsv, writeGearCsv, type CsvField, type ImportProblem } from "@/lib/gear/csv";
+import { csvColumns, readGearCsv, writeGearCsv, type CsvField, type ImportProblem } from "@/lib/gear/csv";
 import { isOverdue } from "@/lib/lending/availability";
 import { wallTimeToInstant } from "@/lib/time";
 import { Temporal } from "temporal-polyfill";
@@ -41,8 +41,31 @@ export interface GearItemDto {
 }
 
 export function toItemDto(row: GearItemRow): GearItemDto {
-  const { createdAt: _created, retiredAt, updatedAt, ...rest } = row;
-  return { ...rest, retiredAt: retiredAt?.toISOString() ?? null, updatedAt: updatedAt.toISOString() };
+  return {
+    id: row.id,
+    labelCode: row.labelCode,
+    name: row.name,
+    kind: row.kind,
+    condition: row.condition,
+    location: row.location,
+    notes: row.notes,
+    approvalRule: row.approvalRule,
+    minMhz: row.minMhz,
+    maxMhz: row.maxMhz,
+    batteryCheckedOn: row.batteryCheckedOn,
+    calibrationCheckedOn: row.calibrationCheckedOn,
+    cableType: row.cableType,
+    lengthM: row.lengthM,
+    connectorA: row.connectorA,
+    connectorB: row.connectorB,
+    heightM: row.heightM,
+    guyKit: row.guyKit,
+    transformerStyle: row.transformerStyle,
+    transformerRatio: row.transformerRatio,
+    powerRatingW: row.powerRatingW,
+    retiredAt: row.retiredAt?.toISOString() ?? null,
+    updatedAt: row.updatedAt.toISOString(),
+  };
 }
 
 /** The columns an item input sets: its kind's details, and null for every other kind's. */
@@ -166,8 +189,11 @@ export async function retireItem(actor: Actor, id: string, reason: string): Prom
   });
 }
 
+const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 export async function getItem(actor: Actor, id: string): Promise<GearItemDto> {
   if (!can(actor, "gear.view")) throw forbidden();
+  if (!uuidPattern.test(id)) throw notFound("That item");
   const [row] = await db().select().from(gearItems).where(eq(gearItems.id, id));
   if (!row) throw notFound("That item");
   return toItemDto(row);
@@ -289,8 +315,7 @@ export async function exportItemsCsv(actor: Actor, query: GearListQuery): Promis
 }
 
 function toCsvRecord(row: GearItemRow): Partial<Record<CsvField, string | number | null>> {
-  const { id: _id, createdAt: _created, updatedAt: _updated, retiredAt: _retired, ...fields } = row;
-  return fields;
+  return Object.fromEntries(csvColumns.map(([, field]) => [field, row[field]]));
 }
 
 export interface ImportPreviewRow {

@@ -4,6 +4,7 @@ import { and, count, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { users } from "@/server/db/schema";
 import { can, type Actor } from "@/server/policy";
+import { lendingHomeSections } from "@/server/services/lending";
 
 export interface NextThing {
   title: string;
@@ -29,6 +30,6 @@ async function membersAwaitingConfirmation(actor: Actor): Promise<HomeSection | 
 }
 
 export async function whatNeedsMeNext(actor: Actor): Promise<HomeSection[]> {
-  const sections = await Promise.all([membersAwaitingConfirmation(actor)]);
-  return sections.filter((section): section is HomeSection => section !== null);
+  const sections = await Promise.all([membersAwaitingConfirmation(actor), lendingHomeSections(actor)]);
+  return sections.flat().filter((section): section is HomeSection => section !== null);
 }

@@ -20,11 +20,11 @@ import { can, canCancelFor, canCoSignLoan, canReturnLoan, canSeeBooking, loanNee
 import { getClubSettings } from "@/server/services/accounts";
 import { itemFileUrl, recordHistory } from "@/server/services/gear";
 import { gearKindLabels } from "@/lib/gear/kinds";
-import { isFree, isOverdue, nextFreeStart, offerExpiry, pickOffers, rangeProblem, type Interval } from "@/lib/lending/availability";
+import { isDueSoon, isFree, isOverdue, nextFreeStart, offerExpiry, pickOffers, rangeProblem, type Interval } from "@/lib/lending/availability";
 import { HAND_OUT_LEAD_HOURS } from "@/lib/lending/next-action";
-import { releasesTime, transition, type BookingState } from "@/lib/lending/states";
+import { allowedActions, releasesTime, transition, type BookingState } from "@/lib/lending/states";
 import { timeInputToInstant } from "@/lib/lending/time-input";
-import { formatInZone } from "@/lib/time";
+import { formatInZone, formatRangeInZone } from "@/lib/time";
 import type { BookingListQuery, BookingRequestInput, BookingStepInput } from "@/validations/lending";
 
 export interface BookingDto {
@@ -41,6 +41,7 @@ export interface BookingDto {
   overdue: boolean;
   note: string | null;
   coSignRequired: boolean;
+  coSigned: boolean;
   coSignedByName: string | null;
   awaitingCoSign: boolean;
   declineReason: string | null;
@@ -111,6 +112,7 @@ function toBookingDto(row: BookingJoin, now = new Date()): BookingDto {
     overdue: isOverdue(booking, now),
     note: booking.note,
     coSignRequired: booking.coSignRequired,
+    coSigned: booking.coSignedBy !== null,
     coSignedByName: row.coSignedByName,
     awaitingCoSign: awaitsCoSign(booking),
     declineReason: booking.declineReason,
@@ -331,14 +333,14 @@ export interface StepResult {
   offered: OfferNotice[];
 }
 
-function mayTakeStep(actor: Actor, booking: GearBookingRow, action: BookingStepInput["action"]): boolean {
+function mayTakeStep(actor: Actor, borrowerId: string, action: BookingStepInput["action"]): boolean {
   switch (action) {
     case "return":
-      return canReturnLoan(actor, booking.borrowerId);
+      return canReturnLoan(actor, borrowerId);
     case "cancel":
-      return canCancelFor(actor, booking.borrowerId, "loans.manage");
+      return canCancelFor(actor, borrowerId, "loans.manage");
     case "co-sign":
-      return canCoSignLoan(actor, booking.borrowerId);
+      return canCoSignLoan(actor, borrowerId);
     default:
       return can(actor, "loans.manage");
   }
@@ -356,7 +358,7 @@ export async function stepBooking(actor: Actor, id: string, step: BookingStepInp
         const item = await lockItem(tx, peek.itemId);
         const [booking] = await tx.select().from(gearBookings).where(eq(gearBookings.id, id));
         if (!canSeeBooking(actor, { borrowerId: booking.borrowerId, awaitingCoSign: awaitsCoSign(booking) })) throw notFound("That booking");
-        if (!mayTakeStep(actor, booking, step.action)) throw forbidden();
+        if (!mayTakeStep(actor, booking.borrowerId, step.action)) throw forbidden();
         const move = transition({ state: booking.state, coSignRequired: booking.coSignRequired, coSigned: booking.coSignedBy !== null }, step.action);
         if (!move.ok) throw conflict(move.message);
         const offered = await settleOffersOf(tx, item, now);
@@ -474,7 +476,7 @@ async function settleOffersOf(tx: Transaction, item: GearItemRow, now: Date): Pr
       event: "waitlist-offered",
       fromState: "waiting",
       toState: "offered",
-      note: `Offered to ${person?.name ?? "the next in line"} until ${expiresAt.toISOString()}.`,
+      note: `Offered to ${person?.name ?? "the next in line"}.`,
       at: now,
     });
     notices.push({
@@ -826,4 +828,65 @@ export async function lendingDesk(actor: Actor, now = new Date()): Promise<Lendi
     overdue: outDtos.filter((booking) => booking.overdue),
     toCoSign: toCoSign.map(dto),
   };
+}
+
+/** The steps this person may take on the booking now: what its state allows and the policy permits. */
+export function stepsFor(actor: Actor, booking: BookingDto): BookingStepInput["action"][] {
+  const facts = { state: booking.state, coSignRequired: booking.coSignRequired, coSigned: booking.coSigned };
+  return allowedActions(facts).filter((action) => mayTakeStep(actor, booking.borrowerId, action));
+}
+
+/** Everyone who has booked something, for the loans table's borrower filter (keepers only). */
+export async function listBorrowers(actor: Actor): Promise<{ id: string; name: string }[]> {
+  if (!can(actor, "loans.viewAll")) throw forbidden();
+  return db()
+    .selectDistinct({ id: users.id, name: users.name })
+    .from(users)
+    .innerJoin(gearBookings, eq(gearBookings.borrowerId, users.id))
+    .orderBy(asc(users.name));
+}
+
+/** The lending desk's part of the home page: due and overdue loans, offers, co-signs, the keepers' queues. */
+export async function lendingHomeSections(actor: Actor, now = new Date()): Promise<{ heading: string; emptyText: string; things: { title: string; detail?: string; href: string }[] }[]> {
+  if (!can(actor, "loans.request")) return [];
+  const [desk, { timeZone }] = await Promise.all([lendingDesk(actor, now), getClubSettings()]);
+  const when = (iso: string) => formatInZone(iso, timeZone);
+  const sections = [];
+  const mine = desk.mine.filter((booking) => booking.state === "out" && (booking.overdue || isDueSoon({ state: booking.state, endsAt: new Date(booking.endsAt) }, now)));
+  sections.push({
+    heading: "Your loans due back",
+    emptyText: "Nothing you borrowed is due back in the next two days.",
+    things: [
+      ...desk.myWaitlist
+        .filter((entry) => entry.state === "offered")
+        .map((entry) => ({ title: `${entry.itemLabelCode} ${entry.itemName} came free for you`, detail: `Accept by ${entry.offerExpiresAt ? when(entry.offerExpiresAt) : "soon"} or it goes to the next in line.`, href: "/lending" })),
+      ...mine.map((booking) => ({
+        title: `${booking.itemLabelCode} ${booking.itemName} ${booking.overdue ? "is overdue" : "is due back soon"}`,
+        detail: `${booking.overdue ? "Was due" : "Due"} ${when(booking.endsAt)}.`,
+        href: `/gear/${booking.itemId}`,
+      })),
+    ],
+  });
+  if (desk.toCoSign.length > 0) {
+    sections.push({
+      heading: "Newcomers waiting for a mentor",
+      emptyText: "",
+      things: desk.toCoSign.map((booking) => ({ title: `Co-sign ${booking.borrowerName}'s request for ${booking.itemLabelCode}`, detail: formatRangeInZone(booking.startsAt, booking.endsAt, timeZone), href: `/gear/${booking.itemId}` })),
+    });
+  }
+  if (can(actor, "loans.manage")) {
+    sections.push({
+      heading: "The lending desk",
+      emptyText: "No requests to approve and nothing overdue.",
+      things: [
+        ...desk.overdue.map((booking) => ({ title: `Overdue: ${booking.itemLabelCode} with ${booking.borrowerName}`, detail: `Was due ${when(booking.endsAt)}.`, href: `/gear/${booking.itemId}` })),
+        ...desk.toApprove.map((booking) => ({
+          title: `Approve or decline: ${booking.borrowerName} asks for ${booking.itemLabelCode}`,
+          detail: `${formatRangeInZone(booking.startsAt, booking.endsAt, timeZone)}${booking.awaitingCoSign ? " · waits for a mentor's co-sign" : ""}`,
+          href: "/lending",
+        })),
+      ],
+    });
+  }
+  return sections;
 }
