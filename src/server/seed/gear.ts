@@ -105,7 +105,8 @@ const demoBookings: BookingSeed[] = [
 export async function seedGear(tx: Transaction): Promise<void> {
   const existing = await tx.select({ id: gearItems.id }).from(gearItems).limit(1);
   if (existing.length > 0) return;
-  const now = Date.now();
+  // Whole hours, so the demo's times read like times people would pick.
+  const now = Math.floor(Date.now() / HOUR) * HOUR;
   const inserted = await tx
     .insert(gearItems)
     .values(demoItems.map((item) => ({ ...item, condition: item.condition ?? "good", approvalRule: item.approvalRule ?? defaultApprovalRule(item.kind) })))
