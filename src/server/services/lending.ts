@@ -13,6 +13,7 @@
 // Service functions return what happened (who was offered what) so a message can be sent later.
 import { and, asc, count, desc, eq, gt, inArray, lte, ne, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
+import Papa from "papaparse";
 import { db, type Executor, type Transaction } from "@/server/db";
 import { gearBookings, gearHistory, gearItemFiles, gearItems, gearWaitlist, storedFiles, users, type GearBookingRow, type GearItemRow } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
@@ -675,7 +676,6 @@ export async function exportBookingsCsv(actor: Actor, query: BookingListQuery): 
   const { timeZone } = await getClubSettings();
   const order = query.dir === "asc" ? asc : desc;
   const rows = await selectBookings(db()).where(bookingListWhere(actor, query)).orderBy(order(bookingSortColumns[query.sort])).limit(EXPORT_LIMIT);
-  const { default: Papa } = await import("papaparse");
   const now = new Date();
   return Papa.unparse(
     {
@@ -854,8 +854,8 @@ export async function lendingHomeSections(actor: Actor, now = new Date()): Promi
   const sections = [];
   const mine = desk.mine.filter((booking) => booking.state === "out" && (booking.overdue || isDueSoon({ state: booking.state, endsAt: new Date(booking.endsAt) }, now)));
   sections.push({
-    heading: "Your loans due back",
-    emptyText: "Nothing you borrowed is due back in the next two days.",
+    heading: "Your gear",
+    emptyText: "Nothing you borrowed is due back in the next two days, and no waitlist offer waits for you.",
     things: [
       ...desk.myWaitlist
         .filter((entry) => entry.state === "offered")
