@@ -183,6 +183,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
         </a>
       </p>
       {result.isError && <p role="alert" className="font-bold text-danger-600">{result.error.message}</p>}
+      {result.isPending && <p className="mt-3 text-slate-600" role="status">Loading the items…</p>}
       <div className="mt-3 overflow-x-auto">
         <table className="w-full text-left" aria-busy={result.isFetching}>
           <thead>

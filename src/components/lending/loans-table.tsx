@@ -158,6 +158,7 @@ export function LoansTable({ timeZone, borrowers }: { timeZone: string; borrower
         </a>
       </p>
       {result.isError && <p role="alert" className="font-bold text-danger-600">{result.error.message}</p>}
+      {result.isPending && <p className="mt-3 text-slate-600" role="status">Loading the loans…</p>}
       <div className="mt-3 overflow-x-auto">
         <table className="w-full text-left" aria-busy={result.isFetching}>
           <thead>
