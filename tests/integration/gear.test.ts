@@ -7,7 +7,7 @@ import { db } from "@/server/db";
 import { gearItems } from "@/server/db/schema";
 import { PublicError } from "@/server/errors";
 import { addItemFile, findItemFile, importItems, listItems, retireItem, updateItem } from "@/server/services/gear";
-import { requestBooking, stepBooking } from "@/server/services/lending";
+import { itemHistory, requestBooking, stepBooking } from "@/server/services/lending";
 import { fileResponse, uploadRules } from "@/server/storage/files";
 import { gearItemSchema, gearListQuerySchema } from "@/validations/gear";
 import { createPerson } from "./helpers";
@@ -105,6 +105,15 @@ describe("uploads", () => {
     expect(early.code).toBe("conflict");
     const stranger = await createPerson("member");
     expect((await publicErrorOf(addItemFile(stranger, item.id, { purpose: "return", bookingId: booking.id, fileName: "r.png", bytes: pngBytes }))).status).toBe(404);
+
+    const steward = await testSteward();
+    await stepBooking(steward, booking.id, { action: "hand-out", condition: "good" });
+    const photo = await addItemFile(member, item.id, { purpose: "return", bookingId: booking.id, fileName: "kinked.png", bytes: pngBytes });
+    const returned = await stepBooking(member, booking.id, { action: "return", condition: "needs_repair", damageNotes: "Kinked near the far end", photoFileId: photo.id });
+    expect(returned.booking.returnPhotoUrl).toBe(photo.url);
+    const history = await itemHistory(steward, item.id);
+    expect(history[0]).toMatchObject({ event: "return", note: "Kinked near the far end", condition: "needs_repair", fileUrl: photo.url });
+    expect((await findItemFile(member, item.id, photo.id)).contentType).toBe("image/png");
   });
 });
 
