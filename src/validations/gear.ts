@@ -15,10 +15,19 @@ import {
 /** Form fields and CSV cells arrive as strings; an empty one means "not given". */
 const blankToUndefined = (value: unknown) => (typeof value === "string" && value.trim() === "" ? undefined : value);
 
+/** A number typed as text ("9", "9.5" or "9,5"); blank stays undefined so the message can ask for it. */
+const toNumber = (value: unknown) => {
+  if (typeof value !== "string") return value;
+  const text = value.trim();
+  if (text === "") return undefined;
+  const number = Number(text.replace(",", "."));
+  return Number.isNaN(number) ? value : number;
+};
+
 const numberIn = (label: string, min: number, max: number, unit: string) =>
   z.preprocess(
-    blankToUndefined,
-    z.coerce
+    toNumber,
+    z
       .number({ error: (issue) => (issue.input === undefined ? `Enter the ${label}.` : `The ${label} must be a number.`) })
       .min(min, `The ${label} must be at least ${min} ${unit}.`)
       .max(max, `The ${label} must be at most ${max} ${unit}.`),

@@ -5,6 +5,7 @@ import { ConditionBadge, StateBadge } from "@/components/gear/badges";
 import { detailSummary } from "@/components/gear/describe";
 import { FileUpload } from "@/components/gear/file-upload";
 import { HistoryList } from "@/components/gear/history-list";
+import { RemoveFileButton } from "@/components/gear/remove-file-button";
 import { RetireForm } from "@/components/gear/retire-form";
 import { BookingSteps } from "@/components/lending/booking-steps";
 import { RequestForm } from "@/components/lending/request-form";
@@ -159,6 +160,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
                   {/* eslint-disable-next-line @next/next/no-img-element -- stored files are served by Guyline's own route */}
                   <img src={photo.url} alt={`Photo of ${item.name}: ${photo.fileName}`} className="h-32 w-auto rounded-lg border border-slate-200 object-cover" />
                 </a>
+                {keeper && <RemoveFileButton url={photo.url} fileName={photo.fileName} />}
               </li>
             ))}
           </ul>
@@ -167,7 +169,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
           <ul className="mt-3 list-disc pl-5">
             {manuals.map((manual) => (
               <li key={manual.id}>
-                <a href={manual.url}>{manual.fileName}</a> ({Math.ceil(manual.byteSize / 1024)} KB)
+                <a href={manual.url}>{manual.fileName}</a> ({Math.ceil(manual.byteSize / 1024)} KB) {keeper && <RemoveFileButton url={manual.url} fileName={manual.fileName} />}
               </li>
             ))}
           </ul>
