@@ -32,7 +32,9 @@ test("a member borrows an analyser: request, approval, hand-out, return with a n
   await member.getByLabel("Until").fill(`${date}T18:00`);
   await member.getByLabel("What it is for (optional)").fill("Tuning the 20 m dipole");
   await member.getByRole("button", { name: "Request it" }).click();
-  await expect(member.getByText("Requested: a steward will approve or decline it.")).toBeVisible();
+  // The page now shows the request waiting for a steward.
+  await expect(member.getByTestId("next-action")).toHaveAttribute("data-action", "awaiting");
+  await expect(member.getByText("A steward will approve or decline it.")).toBeVisible();
 
   const steward = await pageAs(browser, "steward");
   await steward.goto("/lending");
