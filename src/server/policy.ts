@@ -92,3 +92,16 @@ export function canEditLibraryPlan(actor: Actor | null, createdBy: string | null
   if (!can(actor, "plans.save")) return false;
   return actor!.role === "coordinator" || actor!.id === createdBy;
 }
+
+/** A borrower records the return of their own loan; keepers take back anyone's. */
+export function canReturnLoan(actor: Actor | null, borrowerId: string): boolean {
+  if (!can(actor, "loans.request")) return false;
+  return actor!.id === borrowerId || can(actor, "loans.manage");
+}
+
+/** A booking is seen by its borrower, by keepers, and by mentors while it waits for their co-sign. */
+export function canSeeBooking(actor: Actor | null, booking: { borrowerId: string; awaitingCoSign: boolean }): boolean {
+  if (!can(actor, "loans.request")) return false;
+  if (actor!.id === booking.borrowerId || can(actor, "loans.viewAll")) return true;
+  return booking.awaitingCoSign && canCoSignLoan(actor, booking.borrowerId);
+}

@@ -6,6 +6,7 @@ import { hashPassword } from "@/server/services/accounts";
 import { db } from "@/server/db";
 import { seedAntennaDays } from "./antenna-days";
 import { seedBuildSessions } from "./build-sessions";
+import { seedGear } from "./gear";
 import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
 import { seedPlanLibrary } from "./plans";
 
@@ -23,5 +24,6 @@ export async function seedDemo(): Promise<void> {
     await seedAntennaDays(tx, { timeZone: settings!.timeZone, ituRegion: settings!.ituRegion });
     await seedPlanLibrary(tx, { ituRegion: settings!.ituRegion });
     await seedBuildSessions(tx);
+    await seedGear(tx);
   });
 }

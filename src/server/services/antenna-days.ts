@@ -205,7 +205,15 @@ export async function deleteDay(actor: Actor, dayId: string): Promise<void> {
   await db().transaction(async (tx) => {
     const day = await findVisibleDay(actor, dayId, tx, true);
     if (!isDeletable(day.status)) throw conflict("Only drafts can be deleted; cancel a published day instead, so that members are told.");
-    await tx.delete(antennaDays).where(eq(antennaDays.id, dayId));
+    try {
+      await tx.delete(antennaDays).where(eq(antennaDays.id, dayId));
+    } catch (error) {
+      // gear_bookings.antenna_day_id restricts: booked gear keeps its day.
+      if (pgErrorCode(error) === pgErrorCodes.foreignKeyViolation) {
+        throw conflict("Gear is booked for this draft. Cancel those bookings on the lending desk first, or cancel the day instead.");
+      }
+      throw error;
+    }
   });
 }
 

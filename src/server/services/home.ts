@@ -9,6 +9,7 @@ import { listDays } from "@/server/services/antenna-days";
 import { listMyShifts } from "@/server/services/shifts";
 import { formatInZone, formatRangeInZone } from "@/lib/time";
 import { myNextBuildSession, sessionsIMentor } from "@/server/services/build-sessions";
+import { lendingHomeSections } from "@/server/services/lending";
 
 export interface NextThing {
   title: string;
@@ -93,6 +94,7 @@ export async function whatNeedsMeNext(actor: Actor): Promise<HomeSection[]> {
     nextBuildSession(actor),
     buildSessionsIMentor(actor),
     draftAntennaDays(actor),
+    lendingHomeSections(actor),
   ]);
-  return sections.filter((section): section is HomeSection => section !== null);
+  return sections.flat().filter((section): section is HomeSection => section !== null);
 }

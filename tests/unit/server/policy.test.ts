@@ -3,7 +3,7 @@
 // Source: Guyline product brief (shared/design/product.md), "Roles".
 import { describe, expect, it } from "vitest";
 import { roles, type Role } from "@/lib/roles";
-import { can, canCoSignLoan, canEditLibraryPlan, canUploadSweep, loanNeedsCoSign, permissions, type Actor, type Permission } from "@/server/policy";
+import { can, canCoSignLoan, canEditLibraryPlan, canReturnLoan, canSeeBooking, canUploadSweep, loanNeedsCoSign, permissions, type Actor, type Permission } from "@/server/policy";
 
 const C = "coordinator", S = "steward", M = "member", N = "newcomer";
 
@@ -78,6 +78,25 @@ describe("policy: rules about a resource", () => {
     expect(canUploadSweep(actor(M), true)).toBe(true);
     expect(canUploadSweep(actor(M), false)).toBe(false);
     expect(canUploadSweep(actor(N), true)).toBe(false);
+  });
+
+  it("lets a borrower return their own loan and keepers take back anyone's", () => {
+    expect(canReturnLoan(actor(M), "id-member")).toBe(true);
+    expect(canReturnLoan(actor(M), "someone-else")).toBe(false);
+    expect(canReturnLoan(actor(N), "id-newcomer")).toBe(true);
+    expect(canReturnLoan(actor(S), "someone-else")).toBe(true);
+    expect(canReturnLoan(actor(C), "someone-else")).toBe(true);
+    expect(canReturnLoan(actor(M, { confirmed: false }), "id-member")).toBe(false);
+    expect(canReturnLoan(null, "id-member")).toBe(false);
+  });
+
+  it("shows a booking to its borrower, keepers, and mentors only while it waits for a co-sign", () => {
+    expect(canSeeBooking(actor(M), { borrowerId: "id-member", awaitingCoSign: false })).toBe(true);
+    expect(canSeeBooking(actor(M), { borrowerId: "someone-else", awaitingCoSign: false })).toBe(false);
+    expect(canSeeBooking(actor(S), { borrowerId: "someone-else", awaitingCoSign: false })).toBe(true);
+    expect(canSeeBooking(actor(M, { isMentor: true }), { borrowerId: "someone-else", awaitingCoSign: true })).toBe(true);
+    expect(canSeeBooking(actor(M, { isMentor: true }), { borrowerId: "someone-else", awaitingCoSign: false })).toBe(false);
+    expect(canSeeBooking(actor(N), { borrowerId: "someone-else", awaitingCoSign: true })).toBe(false);
   });
 });
 

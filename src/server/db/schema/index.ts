@@ -5,3 +5,5 @@ export * from "./plans";
 export * from "./antenna-days";
 export * from "./mail";
 export * from "./build-sessions";
+export * from "./files";
+export * from "./gear";

@@ -1,0 +1,52 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { signedInAction } from "@/server/action";
+import { PublicError } from "@/server/errors";
+import { joinWaitlist, requestBooking, stepBooking, stepWaitlist } from "@/server/services/lending";
+import { bookingRequestSchema, bookingStepSchema, waitlistJoinSchema, waitlistStepSchema } from "@/validations/lending";
+
+const outcomeMessages = {
+  approved: "Booked: the item is yours for that time. Collect it from a steward.",
+  requested: "Requested: a steward will approve or decline it.",
+  "awaiting-co-sign": "Requested: a mentor co-signs it first, then a steward approves it.",
+} as const;
+
+function revalidateLending(itemId: string) {
+  revalidatePath(`/gear/${itemId}`);
+  revalidatePath("/lending");
+  revalidatePath("/");
+}
+
+/** A clash comes back with the next free time, so the form can offer it or the waitlist. */
+export const requestBookingAction = signedInAction(bookingRequestSchema, async (actor, input) => {
+  try {
+    const { outcome } = await requestBooking(actor, input);
+    revalidateLending(input.itemId);
+    return { ok: true, message: outcomeMessages[outcome] };
+  } catch (error) {
+    if (error instanceof PublicError && error.code === "conflict" && error.details?.nextFreeStart) {
+      return { ok: false, message: error.message, data: error.details as { nextFreeStart: string; nextFreeEnd: string } };
+    }
+    throw error;
+  }
+});
+
+export const bookingStepAction = signedInAction(z.object({ bookingId: z.uuid(), step: bookingStepSchema }), async (actor, { bookingId, step }) => {
+  const { booking } = await stepBooking(actor, bookingId, step);
+  revalidateLending(booking.itemId);
+  return { ok: true, message: `${booking.itemLabelCode}: ${booking.state}.` };
+});
+
+export const joinWaitlistAction = signedInAction(waitlistJoinSchema, async (actor, input) => {
+  await joinWaitlist(actor, input);
+  revalidateLending(input.itemId);
+  return { ok: true, message: "You are on the waitlist. If the time comes free, you are offered it here and on your home page." };
+});
+
+export const waitlistStepAction = signedInAction(z.object({ entryId: z.uuid() }).and(waitlistStepSchema), async (actor, { entryId, action }) => {
+  const { entry, outcome } = await stepWaitlist(actor, entryId, action);
+  revalidateLending(entry.itemId);
+  return { ok: true, message: action === "accept" && outcome ? outcomeMessages[outcome] : "You left the waitlist." };
+});
