@@ -4,7 +4,7 @@
 import { z } from "zod";
 import { bandsForRegion, type ItuRegion } from "@/lib/antenna/bands";
 import { FAMILY_IDS, PLAN_MAX_MHZ, PLAN_MIN_MHZ, type FamilyId } from "@/lib/antenna/plan-schema";
-import { FEEDLINE_TYPES, type FeedlineTypeId } from "@/lib/antenna/feedline";
+import { FEEDLINE_TYPES, type FeedlineTypeId } from "@/lib/antenna/feedline-types";
 import { SLOT_MODES, type SlotMode, type SlotPlanParams } from "@/lib/antenna-days/slot-plan";
 import type { SlotInput } from "./antenna-days";
 

@@ -7,7 +7,7 @@ import { useActionForm } from "@/components/forms/use-action-form";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { FEEDLINE_TYPES } from "@/lib/antenna/feedline";
+import { FEEDLINE_TYPES } from "@/lib/antenna/feedline-types";
 import { MODE_DUTY } from "@/lib/antenna/exposure";
 import { FAMILY_IDS, type FamilyId } from "@/lib/antenna/plan-schema";
 import { FEEDLINE_SLACK_FIXED_M, FEEDLINE_SLACK_FRACTION, SLOT_MODES } from "@/lib/antenna-days/slot-plan";

@@ -8,7 +8,7 @@ import { CheckboxField, SelectField, TextField } from "@/components/ui/field";
 import type { ItuRegion } from "@/lib/antenna/bands";
 import { MODE_DUTY } from "@/lib/antenna/exposure";
 import { FAMILIES } from "@/lib/antenna/families";
-import { FEEDLINE_TYPES } from "@/lib/antenna/feedline";
+import { FEEDLINE_TYPES } from "@/lib/antenna/feedline-types";
 import { GROUND_CLASSES } from "@/lib/antenna/ground-classes";
 import type { PlanFormValues } from "@/lib/plan-screen/form-values";
 import { METRES_PER_FOOT, type Units } from "@/lib/plan-screen/format";

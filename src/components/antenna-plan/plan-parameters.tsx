@@ -2,7 +2,7 @@
 // renders on the server.
 import { MODE_DUTY } from "@/lib/antenna/exposure";
 import { FAMILIES } from "@/lib/antenna/families";
-import { feedlineType } from "@/lib/antenna/feedline";
+import { feedlineType } from "@/lib/antenna/feedline-types";
 import { groundClass } from "@/lib/antenna/ground-classes";
 import type { PlanRequest } from "@/lib/antenna/plan-schema";
 import { formatDistance, type Units } from "@/lib/plan-screen/format";

@@ -1,6 +1,6 @@
 // Short readable descriptions of items and bookings, shared by the shelf, the item page and labels.
 import { cableTypeLabels, coaxConnectorLabels, type CoaxConnector } from "@/lib/gear/kinds";
-import type { FeedlineTypeId } from "@/lib/antenna/feedline";
+import type { FeedlineTypeId } from "@/lib/antenna/feedline-types";
 
 interface DetailFields {
   kind: string;

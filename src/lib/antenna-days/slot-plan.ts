@@ -6,7 +6,7 @@
  */
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
 import type { OperatingMode } from "@/lib/antenna/exposure";
-import type { FeedlineTypeId } from "@/lib/antenna/feedline";
+import type { FeedlineTypeId } from "@/lib/antenna/feedline-types";
 import type { GroundChoice, GroundClassId } from "@/lib/antenna/ground-classes";
 import type { PlanRequest, PlanRequestInput } from "@/lib/antenna/plan-schema";
 import { distance, type Point } from "@/lib/site-plan/geometry";

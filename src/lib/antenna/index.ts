@@ -5,11 +5,10 @@
 export { ITU_REGIONS, BAND_NAMES, bandAt, bandByName, bandCentreMHz, bandsForRegion } from "./bands";
 export type { Band, ItuRegion, AllocationStatus } from "./bands";
 
+export { FEEDLINE_TYPES, TRANSFORMERS, feedlineType } from "./feedline-types";
+export type { FeedlineType, FeedlineTypeId, Transformer, TransformerId } from "./feedline-types";
 export {
-  FEEDLINE_TYPES,
   RADIO_REFERENCE_OHMS,
-  TRANSFORMERS,
-  feedlineType,
   gammaFromSwr,
   inputImpedance,
   lineSection,
@@ -23,7 +22,7 @@ export {
   throughFeedChain,
   totalLossDb,
 } from "./feedline";
-export type { FeedChainPoint, FeedlineType, FeedlineTypeId, LineSection, Transformer, TransformerId } from "./feedline";
+export type { FeedChainPoint, LineSection } from "./feedline";
 
 export { GROUND_CAUTION, GROUND_CLASSES, toSolverGround } from "./ground-classes";
 export type { GroundChoice, GroundClass, GroundClassId } from "./ground-classes";

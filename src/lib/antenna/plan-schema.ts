@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { bandAt, bandByName, type ItuRegion } from "./bands";
 import { MODE_DUTY, type OperatingMode } from "./exposure";
-import { FEEDLINE_TYPES, type FeedlineTypeId } from "./feedline";
+import { FEEDLINE_TYPES, type FeedlineTypeId } from "./feedline-types";
 import { GROUND_CLASS_IDS } from "./ground-classes";
 
 /** Wire plans from 160 m to 70 cm: below 1.8 MHz a half-wave is longer than any field. */

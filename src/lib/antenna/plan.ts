@@ -13,13 +13,8 @@ import { exposureDistances, type ExposureResult } from "./exposure";
 import { familyModel } from "./families";
 import type { ElementTarget, FamilyModel, RuleOfThumb, Site } from "./families/family";
 import { MIN_CLEARANCE_M } from "./families/family";
-import {
-  TRANSFORMERS,
-  feedlineType,
-  throughFeedChain,
-  type FeedlineType,
-  type Transformer,
-} from "./feedline";
+import { throughFeedChain } from "./feedline";
+import { TRANSFORMERS, feedlineType, type FeedlineType, type Transformer } from "./feedline-types";
 import { GROUND_CAUTION, toSolverGround } from "./ground-classes";
 import { wavelengthMetres } from "./physics";
 import { planRequestSchema, type FamilyId, type PlanRequest } from "./plan-schema";

@@ -1,6 +1,6 @@
 // The gear shelf's vocabulary: kinds of item, their condition, and the kind-specific choices.
 // Plain constants shared by the schema, the validations, the import and the pages.
-import { FEEDLINE_TYPES, TRANSFORMERS, type FeedlineTypeId, type TransformerId } from "@/lib/antenna/feedline";
+import { FEEDLINE_TYPES, TRANSFORMERS, type FeedlineTypeId, type TransformerId } from "@/lib/antenna/feedline-types";
 
 export const gearKinds = ["analyser", "coax", "mast", "balun", "tuner", "power", "radio", "tools", "other"] as const;
 export type GearKind = (typeof gearKinds)[number];

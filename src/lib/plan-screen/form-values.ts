@@ -5,7 +5,7 @@
  * unknown keys). Pure: used by the plan screen in the browser and by its unit tests.
  */
 import type { OperatingMode } from "@/lib/antenna/exposure";
-import type { FeedlineTypeId } from "@/lib/antenna/feedline";
+import type { FeedlineTypeId } from "@/lib/antenna/feedline-types";
 import type { GroundClassId } from "@/lib/antenna/ground-classes";
 import type { FamilyId, PlanRequestInput } from "@/lib/antenna/plan-schema";
 

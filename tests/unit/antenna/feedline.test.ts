@@ -1,10 +1,8 @@
 import { complex, type Complex } from "mathjs";
 import { describe, expect, it } from "vitest";
+import { FEEDLINE_TYPES, TRANSFORMERS, feedlineType } from "@/lib/antenna/feedline-types";
 import {
   DB_PER_NEPER,
-  FEEDLINE_TYPES,
-  TRANSFORMERS,
-  feedlineType,
   gammaFromSwr,
   inputGammaMagnitude,
   inputImpedance,

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { bandByName } from "@/lib/antenna/bands";
 import { exposureDistances } from "@/lib/antenna/exposure";
-import { feedlineType, gammaFromSwr, inputGammaMagnitude, matchedLossDb, swrFromGamma } from "@/lib/antenna/feedline";
+import { gammaFromSwr, inputGammaMagnitude, matchedLossDb, swrFromGamma } from "@/lib/antenna/feedline";
+import { feedlineType } from "@/lib/antenna/feedline-types";
 import { plan, swrBandwidth, swrMinimum, sweepFrequencies, zeroCrossing } from "@/lib/antenna/plan";
 import { EngineInputError } from "@/lib/antenna/problems";
 

@@ -6,7 +6,7 @@
  * higher or lower). Tuned for the lowest SWR at the centre frequency through
  * the unun (see resonance.ts for why not for zero reactance).
  */
-import { TRANSFORMERS, feedlineType } from "../feedline";
+import { TRANSFORMERS, feedlineType } from "../feedline-types";
 import { wavelengthMetres } from "../physics";
 import type { SingleBandPlanRequest } from "../plan-schema";
 import type { Vec3 } from "../structure";

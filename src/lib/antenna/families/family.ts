@@ -6,7 +6,7 @@
  */
 import type { Band } from "../bands";
 import type { CutPiece } from "../cut-sheet";
-import type { TransformerId } from "../feedline";
+import type { TransformerId } from "../feedline-types";
 import { wavelengthMetres } from "../physics";
 import type { FamilyId } from "../plan-schema";
 import type { Tuning } from "../resonance";
