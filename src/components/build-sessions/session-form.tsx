@@ -70,8 +70,8 @@ export function SessionForm({ choices, defaults, action, submitLabel }: SessionF
       <fieldset className="mb-4 rounded-lg border border-slate-300 p-4">
         <legend className="px-1 font-bold">The antenna plan</legend>
         <SelectField
-          label="What is built: a plan from the plan library"
-          hint="Choosing one fills in the fields below; a change you make there stays with this session."
+          label="Start from a library plan"
+          hint="What is built: choosing a plan fills in the fields below; a change you make there stays with this session."
           options={[{ value: "", label: "None: the plan below" }, ...choices.libraryPlans]}
           error={errorOf("libraryPlanId")}
           {...libraryPlan}
