@@ -34,10 +34,20 @@ export type DayInput = z.infer<typeof daySchema>;
 /** The edit form: the day's fields and its id. */
 export const dayEditSchema = z.object({ ...dayFields, dayId: z.uuid() }).refine((day) => day.endsAtLocal > day.startsAtLocal, endsAfterStart);
 
-/** A partial change; `status` moves the day along its life (publish, done, cancel). */
+/** A cancellation's note to members, in the e-mail that tells them. */
+export const cancelReasonField = text(500)
+  .transform((value) => value || undefined)
+  .optional();
+
+/** A partial change; `status` moves the day along its life (publish, done, cancel); `cancelReason` goes with a cancellation. */
 export const dayPatchSchema = z
-  .object({ ...z.object(dayFields).partial().shape, status: z.enum(DAY_STATUSES, { message: "Unknown status." }).optional() })
-  .refine((day) => !day.startsAtLocal || !day.endsAtLocal || day.endsAtLocal > day.startsAtLocal, endsAfterStart);
+  .object({
+    ...z.object(dayFields).partial().shape,
+    status: z.enum(DAY_STATUSES, { message: "Unknown status." }).optional(),
+    cancelReason: cancelReasonField,
+  })
+  .refine((day) => !day.startsAtLocal || !day.endsAtLocal || day.endsAtLocal > day.startsAtLocal, endsAfterStart)
+  .refine((day) => !day.cancelReason || day.status === "cancelled", { path: ["cancelReason"], message: "A note goes only with cancelling the day." });
 export type DayPatch = z.infer<typeof dayPatchSchema>;
 
 const copyFields = { title: required(120, "Give the new day a title."), startsAtLocal: wallTimeField, endsAtLocal: wallTimeField };

@@ -99,6 +99,8 @@ const formPlanSchema = z
 
 export const buildSessionFormSchema = buildSessionSchema.extend({
   plan: formPlanSchema,
+  // The form's "none" is an empty choice.
+  libraryPlanId: z.preprocess((value) => (value === "" ? null : value), buildSessionFields.libraryPlanId),
   mentorIds: z.preprocess((value) => (Array.isArray(value) ? value : value ? [value] : []), buildSessionFields.mentorIds),
   notes: z.string().trim().max(2000, "Use at most 2000 characters.").transform((value) => value || null),
 });

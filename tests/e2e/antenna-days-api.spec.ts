@@ -83,6 +83,7 @@ test("signed-out requests get 401 on every route", async () => {
     ["POST", `/api/antenna-days/${day}/copy`],
     ["GET", `/api/antenna-days/${day}/slots`],
     ["POST", `/api/antenna-days/${day}/slots`],
+    ["GET", `/api/antenna-days/${day}/ics`],
     ["GET", "/api/sites"],
     ["POST", "/api/sites"],
     ["GET", `/api/sites/${site}`],
@@ -113,6 +114,11 @@ test("members and newcomers read published days, sites, slots, shifts and the ca
     expect(list.days.some((day: { id: string }) => day.id === fixture.draftDayId)).toBe(false);
     expect((await context.get(`/api/antenna-days/${fixture.publishedDayId}`)).status()).toBe(200);
     expect((await context.get(`/api/antenna-days/${fixture.draftDayId}`)).status()).toBe(404);
+    const ics = await context.get(`/api/antenna-days/${fixture.publishedDayId}/ics`);
+    expect(ics.status()).toBe(200);
+    expect(ics.headers()["content-type"]).toBe("text/calendar; charset=utf-8");
+    expect(await ics.text()).toContain(`UID:antenna-day-${fixture.publishedDayId}@guyline`);
+    expect((await context.get(`/api/antenna-days/${fixture.draftDayId}/ics`)).status()).toBe(404);
     const slots = await (await context.get(`/api/antenna-days/${fixture.publishedDayId}/slots`)).json();
     expect(slots.slots[0]).toMatchObject({ name: "API station", bands: ["20m"] });
     expect((await context.get(`/api/slots/${fixture.slotId}`)).status()).toBe(200);
@@ -204,6 +210,7 @@ test("missing resources get 404", async () => {
     [coordinator, "DELETE", `/api/antenna-days/${missing}`],
     [coordinator, "POST", `/api/antenna-days/${missing}/copy`, { title: "X", startsAtLocal: `${date}T09:00`, endsAtLocal: `${date}T10:00` }],
     [coordinator, "GET", `/api/antenna-days/${missing}/slots`],
+    [coordinator, "GET", `/api/antenna-days/${missing}/ics`],
     [coordinator, "POST", `/api/antenna-days/${missing}/slots`, slotBody("X")],
     [coordinator, "GET", `/api/sites/${missing}`],
     [coordinator, "PATCH", `/api/sites/${missing}`, siteBody("X")],

@@ -6,12 +6,10 @@ import { describe, expect, it } from "vitest";
 import { db } from "@/server/db";
 import { antennaDays, shifts } from "@/server/db/schema";
 import { PublicError } from "@/server/errors";
-import type { Actor } from "@/server/policy";
-import { copyDay, createDay, deleteDay, getDay, listDays, updateDay } from "@/server/services/antenna-days";
+import { copyDay, deleteDay, getDay, listDays, updateDay } from "@/server/services/antenna-days";
 import { cancelSignUp, createShift, listShifts, signUp, updateShift } from "@/server/services/shifts";
-import { createSite } from "@/server/services/sites";
 import { createSlot, getSlotWithContext, listSlots, saveSlotPlan, updateSlot } from "@/server/services/station-slots";
-import type { SlotInput } from "@/validations/antenna-days";
+import { dipoleSlot, newDay } from "./antenna-day-helpers";
 import { createPerson } from "./helpers";
 
 async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
@@ -22,50 +20,6 @@ async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
   expect(error).toBeInstanceOf(PublicError);
   return error as PublicError;
 }
-
-let siteCounter = 0;
-async function newSite(coordinator: Actor) {
-  siteCounter += 1;
-  return createSite(coordinator, {
-    name: `Test field ${Date.now()}-${siteCounter}`,
-    widthM: 200,
-    depthM: 150,
-    groundClass: "average",
-    groundConductivitySm: null,
-    groundRelativePermittivity: null,
-    notes: "",
-    hazards: [{ kind: "power-line", label: "Line", points: [[0, 140], [200, 140]], heightM: 10 }],
-  });
-}
-
-/** A day in 2031 (club time Europe/London), 09:00–17:00. */
-async function newDay(coordinator: Actor, options: { date?: string } = {}) {
-  const site = await newSite(coordinator);
-  const date = options.date ?? "2031-06-14";
-  return createDay(coordinator, {
-    title: "Test antenna day",
-    siteId: site.id,
-    startsAtLocal: `${date}T09:00`,
-    endsAtLocal: `${date}T17:00`,
-    meetingPoint: "The gate",
-    description: "",
-    safetyLeadId: coordinator.id,
-  });
-}
-
-const dipoleSlot = (name: string, x: number, y: number): SlotInput => ({
-  name,
-  bands: ["20m"],
-  powerW: 100,
-  mode: "ssb",
-  planParams: { family: "dipole", heightM: 10, wireDiameterMm: 2, feedlineType: "rg213" },
-  x,
-  y,
-  azimuthDeg: 90,
-  tentX: x,
-  tentY: y - 20,
-  feedlineRunOverrideM: null,
-});
 
 async function publishedDayWithShift(capacity: number, times = { startsAtLocal: "2031-06-14T09:00", endsAtLocal: "2031-06-14T13:00" }) {
   const coordinator = await createPerson("coordinator");

@@ -10,14 +10,9 @@ import { verifyCredentials } from "@/server/services/accounts";
 import { buildSessionIcs, cancelBuildSession, signUpForSession, updateBuildSession } from "@/server/services/build-sessions";
 import { applyUnsubscribeToken, getMailChoices, setMailChoices } from "@/server/services/mail-preferences";
 import { findOpenReset, requestSignInHelp, resetPassword, signInHelpLimits } from "@/server/services/sign-in-help";
-import { outboxFor } from "./mail-helpers";
+import { outboxFor, parseCalendar } from "./mail-helpers";
 import { createPerson, scheduleSession, testPassword } from "./helpers";
 
-function parseCalendar(ics: string) {
-  const calendar = new ICAL.Component(ICAL.parse(ics));
-  for (const zone of calendar.getAllSubcomponents("vtimezone")) ICAL.TimezoneService.register(zone);
-  return calendar;
-}
 const tokenOf = (url: string) => url.split("/").at(-1)!;
 
 describe("calendar files and feeds", () => {

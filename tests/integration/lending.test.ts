@@ -6,7 +6,9 @@ import { db, pool } from "@/server/db";
 import { gearBookings } from "@/server/db/schema";
 import { PublicError, pgErrorCodes } from "@/server/errors";
 import { bookForStation, getBooking, itemHistory, itemWaitlist as itemWaitlistOf, joinWaitlist, listBookings, requestBooking, settleLapsedOffers, stepBooking, stepWaitlist } from "@/server/services/lending";
+import { createSlot } from "@/server/services/station-slots";
 import { bookingListQuerySchema } from "@/validations/lending";
+import { dipoleSlot, newDay } from "./antenna-day-helpers";
 import { createPerson } from "./helpers";
 import { addAnalyser, addCoaxRun, clubTime, testSteward } from "./gear-helpers";
 
@@ -185,8 +187,10 @@ describe("a whole loan", () => {
     const again = await publicErrorOf(stepBooking(member, booking.id, { action: "cancel" }));
     expect(again.code).toBe("conflict");
 
-    const dayId = "00000000-0000-4000-8000-000000000001";
-    const slotId = "00000000-0000-4000-8000-000000000002";
+    const coordinator = await createPerson("coordinator");
+    const day = await newDay(coordinator);
+    const slot = await createSlot(coordinator, day.id, dipoleSlot("Kit test", 50, 60));
+    const [dayId, slotId] = [day.id, slot.id];
     const kit = await bookForStation(steward, { itemId: item.id, startsAt: clubTime(10, 8), endsAt: clubTime(10, 18), antennaDayId: dayId, stationSlotId: slotId });
     expect(kit.booking).toMatchObject({ state: "approved", antennaDayId: dayId, stationSlotId: slotId });
     expect((await publicErrorOf(bookForStation(member, { itemId: item.id, startsAt: clubTime(11, 8), endsAt: clubTime(11, 18), antennaDayId: dayId }))).status).toBe(403);

@@ -4,8 +4,12 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { existsSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { and, eq, inArray } from "drizzle-orm";
+import ICAL from "ical.js";
+import { simpleParser, type ParsedMail } from "mailparser";
 import { db } from "@/server/db";
 import { capturedMail, mailOutbox } from "@/server/db/schema";
+import { deliverOutboxMessage } from "@/server/mail/delivery";
+import { createMailTransport } from "@/server/mail/transport";
 
 export const smtpPort = Number(process.env.GUYLINE_SMTP_INTEGRATION_PORT ?? 2725);
 
@@ -67,6 +71,23 @@ export async function capturedFor(address: string) {
     .orderBy(capturedMail.receivedAt);
 }
 
+/**
+ * Sends outbox rows at once through the real delivery code and SMTP to the local mail server on
+ * `port`, and returns what it captured, parsed by mailparser. Tests that only need their own
+ * messages use it instead of the worker, whose queue may hold every other test's mail.
+ */
+export async function deliverNow(outboxIds: string[], port = smtpPort): Promise<(ParsedMail & { envelopeTo: string[] })[]> {
+  const transport = createMailTransport({ host: "127.0.0.1", port, from: "Guyline <guyline@localhost>" });
+  try {
+    for (const id of outboxIds) await deliverOutboxMessage(id, transport, "Guyline <guyline@localhost>");
+  } finally {
+    transport.close();
+  }
+  const ids = outboxIds.map((id) => `<${id}@localhost>`);
+  const captured = outboxIds.length === 0 ? [] : await db().select().from(capturedMail).where(inArray(capturedMail.messageId, ids));
+  return Promise.all(captured.map(async (row) => Object.assign(await simpleParser(row.raw), { envelopeTo: row.envelopeTo })));
+}
+
 export async function outboxFor(userIds: string[], template?: string) {
   return db()
     .select()
@@ -91,4 +112,11 @@ export function resolvesToRoute(pathname: string): boolean {
     return entries.some((entry) => /^\[[^.\]]+\]$/.test(entry.name) && walk(join(dir, entry.name), rest));
   };
   return walk(join(process.cwd(), "src/app"), pathname.split("/").filter(Boolean));
+}
+
+/** An iCalendar text parsed by ical.js, with its VTIMEZONEs registered so times resolve. */
+export function parseCalendar(ics: string) {
+  const calendar = new ICAL.Component(ICAL.parse(ics));
+  for (const zone of calendar.getAllSubcomponents("vtimezone")) ICAL.TimezoneService.register(zone);
+  return calendar;
 }

@@ -8,11 +8,17 @@ import { Notice } from "@/components/ui/notice";
 import type { DayStatus } from "@/lib/antenna-days/status";
 import type { ActionResult } from "@/server/action";
 
-const statusButtons: Partial<Record<DayStatus, { label: string; variant: "primary" | "secondary" | "danger"; confirm?: string }>> = {
+const statusButtons: Partial<Record<DayStatus, { label: string; variant: "primary" | "secondary" | "danger" }>> = {
   published: { label: "Publish", variant: "primary" },
   done: { label: "Mark as done", variant: "secondary" },
-  cancelled: { label: "Cancel the day", variant: "danger", confirm: "Cancel this antenna day? Members will see it as cancelled; this cannot be undone." },
+  cancelled: { label: "Cancel the day", variant: "danger" },
 };
+
+/** Cancelling a published day asks for a note to members; null when the coordinator steps back. */
+function askCancelReason(status: DayStatus): string | null {
+  if (status !== "published") return window.confirm("Cancel this draft? This cannot be undone.") ? "" : null;
+  return window.prompt("Cancel this antenna day? Every member is told by e-mail, and it cannot be undone.\n\nA note for them, such as the reason (optional):", "");
+}
 
 /** The coordinator's buttons for a day: edit, copy, publish, mark done, cancel, delete a draft. */
 export function DayActions({ dayId, status, nextStatuses, editable }: { dayId: string; status: DayStatus; nextStatuses: DayStatus[]; editable: boolean }) {
@@ -48,8 +54,9 @@ export function DayActions({ dayId, status, nextStatuses, editable }: { dayId: s
               variant={button.variant}
               disabled={pending}
               onClick={() => {
-                if (button.confirm && !window.confirm(button.confirm)) return;
-                run(() => changeDayStatusAction({ dayId, status: next }));
+                if (next !== "cancelled") return run(() => changeDayStatusAction({ dayId, status: next }));
+                const cancelReason = askCancelReason(status);
+                if (cancelReason !== null) run(() => changeDayStatusAction({ dayId, status: next, cancelReason }));
               }}
             >
               {button.label}

@@ -10,7 +10,13 @@ import { buildSessionFormSchema, editBuildSessionFormSchema, type BuildSessionFo
 
 type Option = { value: string; label: string };
 
+/** A plan from the plan library that the form can show: choosing it fills in the plan fields. */
+export interface LibraryPlanChoice extends Option {
+  plan: BuildSessionFormValues["plan"];
+}
+
 export interface SessionFormChoices {
+  libraryPlans: LibraryPlanChoice[];
   families: Option[];
   bands: Option[];
   feedlines: Option[];
@@ -38,6 +44,12 @@ export function SessionForm({ choices, defaults, action, submitLabel }: SessionF
   });
   const family = form.watch("plan.family");
   const register = form.register;
+  const libraryPlan = register("libraryPlanId", {
+    onChange: (event: { target: { value: string } }) => {
+      const choice = choices.libraryPlans.find((option) => option.value === event.target.value);
+      if (choice) form.setValue("plan", choice.plan, { shouldDirty: true });
+    },
+  });
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label={submitLabel}>
@@ -57,6 +69,13 @@ export function SessionForm({ choices, defaults, action, submitLabel }: SessionF
 
       <fieldset className="mb-4 rounded-lg border border-slate-300 p-4">
         <legend className="px-1 font-bold">The antenna plan</legend>
+        <SelectField
+          label="Start from a library plan"
+          hint="What is built: choosing a plan fills in the fields below; a change you make there stays with this session."
+          options={[{ value: "", label: "None: the plan below" }, ...choices.libraryPlans]}
+          error={errorOf("libraryPlanId")}
+          {...libraryPlan}
+        />
         <div className="grid gap-x-4 md:grid-cols-2">
           <SelectField label="Antenna" options={choices.families} error={errorOf("plan.family")} {...register("plan.family")} />
           <SelectField label="Band" options={choices.bands} error={errorOf("plan.band")} {...register("plan.band")} />

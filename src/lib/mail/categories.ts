@@ -24,6 +24,10 @@ export const mailCategoryTopics: Record<MailCategory, string> = {
   lending: "the lending desk",
 };
 
+/** What goes out whatever a member chooses; each such template says why in its `alwaysSent`. */
+export const alwaysSentSummary =
+  "Always sent, whatever you choose: invitations and sign-in help, the news that an antenna day or a build session you signed up for is cancelled, and a shift a coordinator removed from your plans.";
+
 export function isOptionalCategory(value: string): value is OptionalMailCategory {
   return (optionalMailCategories as readonly string[]).includes(value);
 }

@@ -10,14 +10,15 @@ import { forbidden } from "@/server/errors";
 import { can, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
 import { buildSessionFeed } from "@/server/services/build-sessions";
+import { antennaDayFeed, loanFeed, shiftFeed } from "./feed-sources";
 
-/** Where a person's events come from. Antenna days, shifts and loans add their sources here. */
+/** Where a person's events come from. */
 export interface FeedSource {
   name: string;
   eventsFor(userId: string): Promise<CalendarEvent[]>;
 }
 
-export const feedSources: FeedSource[] = [buildSessionFeed];
+export const feedSources: FeedSource[] = [antennaDayFeed, shiftFeed, buildSessionFeed, loanFeed];
 
 const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 

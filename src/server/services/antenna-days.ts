@@ -1,12 +1,14 @@
 // Antenna days: create, edit, publish, mark done, cancel, delete drafts, copy. Members see
 // published (and done or cancelled) days; coordinators see drafts too. Every change of a day
-// raises its `sequence` (iCalendar SEQUENCE for calendar feeds) and its `updated_at`.
+// raises its `sequence` (iCalendar SEQUENCE for calendar feeds) and its `updated_at`; publishing,
+// changing a published day and cancelling it e-mail the club in the same transaction.
 import { and, asc, eq, gte, inArray, isNotNull, lte, ne, sql } from "drizzle-orm";
 import { db, type Executor } from "@/server/db";
 import { antennaDays, sites, stationSlots, users, type AntennaDayRow } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
+import { dayIcsFile, daySnapshot, tellDayChange } from "@/server/services/antenna-day-messages";
 import { availableTransitions, DAY_STATUSES, isDeletable, isEditable, transitionProblem, type DayStatus } from "@/lib/antenna-days/status";
 import { instantToWallTime, wallTimeToInstant } from "@/lib/time";
 import type { DayInput, DayPatch } from "@/validations/antenna-days";
@@ -95,9 +97,10 @@ export async function findEditableDay(actor: Actor, dayId: string, executor: Exe
   return day;
 }
 
-export async function listDays(actor: Actor, range: { from?: Date; to?: Date } = {}): Promise<DayDto[]> {
+/** Days the person may see, optionally overlapping a range; a caller that read the club's settings passes them. */
+export async function listDays(actor: Actor, range: { from?: Date; to?: Date } = {}, club?: { timeZone: string }): Promise<DayDto[]> {
   if (!can(actor, "antennaDays.view")) throw forbidden();
-  const { timeZone } = await getClubSettings();
+  const { timeZone } = club ?? (await getClubSettings());
   const rows = await selectDays()
     .where(
       and(
@@ -168,7 +171,7 @@ export async function updateDay(actor: Actor, dayId: string, patch: DayPatch, no
   const { timeZone } = await getClubSettings();
   await db().transaction(async (tx) => {
     const day = await findVisibleDay(actor, dayId, tx, true);
-    const { status, ...fields } = patch;
+    const { status, cancelReason, ...fields } = patch;
     const detailsChange = Object.values(fields).some((value) => value !== undefined);
     if (detailsChange && !isEditable(day.status)) throw conflict(`This day is ${day.status}; its details cannot change any more.`);
     if (fields.siteId) await checkSite(tx, fields.siteId);
@@ -181,6 +184,7 @@ export async function updateDay(actor: Actor, dayId: string, patch: DayPatch, no
       if (problem) throw conflict(problem);
     }
     if (!detailsChange && (status === undefined || status === day.status)) return;
+    const before = await daySnapshot(tx, dayId);
     await tx
       .update(antennaDays)
       .set({
@@ -196,8 +200,16 @@ export async function updateDay(actor: Actor, dayId: string, patch: DayPatch, no
         updatedAt: now,
       })
       .where(eq(antennaDays.id, dayId));
+    await tellDayChange(tx, before, { timeZone, cancelReason: cancelReason ?? null });
   });
   return getDay(actor, dayId);
+}
+
+/** The day as an iCalendar file, for whoever may see it (a draft is "not found" to members). */
+export async function antennaDayIcs(actor: Actor, dayId: string): Promise<{ filename: string; content: string }> {
+  await findVisibleDay(actor, dayId);
+  const file = await dayIcsFile(db(), await daySnapshot(db(), dayId));
+  return { filename: file.filename, content: file.content };
 }
 
 export async function deleteDay(actor: Actor, dayId: string): Promise<void> {

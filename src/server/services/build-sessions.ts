@@ -13,7 +13,7 @@ import type { ReminderWindow } from "@/lib/mail/reminder-clock";
 import { formatRangeInZone, instantToWallTime, wallTimeToInstant } from "@/lib/time";
 import { serverEnv } from "@/env";
 import { db, type Executor, type Transaction } from "@/server/db";
-import { buildSessionMentors, buildSessionSignups, buildSessions, clubSettings, users, type OutboxAttachment } from "@/server/db/schema";
+import { antennaPlans, buildSessionMentors, buildSessionSignups, buildSessions, clubSettings, users, type OutboxAttachment } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { enqueueMail } from "@/server/mail/outbox";
 import { can, canCancelFor, canMentorSessions, type Actor } from "@/server/policy";
@@ -57,6 +57,8 @@ export interface Participant extends PersonRef {
 export interface BuildSessionDetail extends BuildSessionSummary {
   plan: PlanRequest;
   libraryPlanId: string | null;
+  /** The plan library entry the antenna was taken from. */
+  libraryPlan: { id: string; name: string } | null;
   antennaDayId: string | null;
   raisesMast: boolean;
   notes: string | null;
@@ -152,7 +154,12 @@ export async function getBuildSession(actor: Actor, id: string): Promise<BuildSe
   if (!can(actor, "buildSessions.view")) throw forbidden();
   const [row] = await db().select().from(buildSessions).where(eq(buildSessions.id, id));
   if (!row) throw notFound("That build session");
-  const [mentors, signups, club] = await Promise.all([mentorsOf(db(), [id]), signupsOf(db(), [id]), getClubSettings()]);
+  const [mentors, signups, club, libraryPlan] = await Promise.all([
+    mentorsOf(db(), [id]),
+    signupsOf(db(), [id]),
+    getClubSettings(),
+    row.libraryPlanId ? db().query.antennaPlans.findFirst({ where: eq(antennaPlans.id, row.libraryPlanId), columns: { id: true, name: true } }) : null,
+  ]);
   const sessionMentors = mentors.get(id)!;
   const sessionSignups = signups.get(id)!;
   const result = planFor(row.plan);
@@ -161,6 +168,7 @@ export async function getBuildSession(actor: Actor, id: string): Promise<BuildSe
     ...summaryOf(row, sessionMentors, sessionSignups, actor.id),
     plan: row.plan,
     libraryPlanId: row.libraryPlanId,
+    libraryPlan: libraryPlan ?? null,
     antennaDayId: row.antennaDayId,
     raisesMast: row.raisesMast,
     notes: row.notes,
@@ -301,6 +309,13 @@ async function checkMentors(executor: Executor, mentorIds: string[]): Promise<vo
   if (notMentor) throw badInput("mentorIds", `${notMentor.name} is not a mentor. Set the mentor flag on the members page first.`);
 }
 
+/** A plan chosen from the library must be there; the share lock keeps it there until the session is saved. */
+async function checkLibraryPlan(tx: Transaction, planId: string | null | undefined): Promise<void> {
+  if (!planId) return;
+  const [plan] = await tx.select({ id: antennaPlans.id }).from(antennaPlans).where(eq(antennaPlans.id, planId)).for("share");
+  if (!plan) throw badInput("libraryPlanId", "That plan is not in the plan library any more.");
+}
+
 function instants(startsAtWall: string, endsAtWall: string, timeZone: string) {
   const startsAt = wallTimeToInstant(startsAtWall, timeZone);
   const endsAt = wallTimeToInstant(endsAtWall, timeZone);
@@ -316,6 +331,7 @@ export async function createBuildSession(actor: Actor, input: BuildSessionInput)
   checkPlan(input.plan);
   return db().transaction(async (tx) => {
     await checkMentors(tx, input.mentorIds);
+    await checkLibraryPlan(tx, input.libraryPlanId);
     const [row] = await tx
       .insert(buildSessions)
       .values({
@@ -365,6 +381,7 @@ export async function updateBuildSession(actor: Actor, id: string, patch: BuildS
     if (capacity < before.taken) {
       throw badInput("capacity", `${before.taken} people already have a place; the capacity cannot go below that.`);
     }
+    await checkLibraryPlan(tx, patch.libraryPlanId);
     if (patch.mentorIds) {
       await checkMentors(tx, patch.mentorIds);
       await tx.delete(buildSessionMentors).where(eq(buildSessionMentors.sessionId, id));

@@ -1,5 +1,6 @@
 // "What needs me next": the few things on the home page that wait for this person.
-// Each area of Guyline adds its own source here.
+// Each area of Guyline adds its own source here. The club's settings are read once per request
+// and passed to every section.
 import { and, count, isNull } from "drizzle-orm";
 import { db } from "@/server/db";
 import { users } from "@/server/db/schema";
@@ -24,6 +25,10 @@ export interface HomeSection {
   things: NextThing[];
 }
 
+interface Club {
+  timeZone: string;
+}
+
 async function membersAwaitingConfirmation(actor: Actor): Promise<HomeSection | null> {
   if (!can(actor, "members.manage")) return null;
   const [{ waiting }] = await db().select({ waiting: count() }).from(users).where(and(isNull(users.confirmedAt)));
@@ -34,23 +39,23 @@ async function membersAwaitingConfirmation(actor: Actor): Promise<HomeSection | 
   };
 }
 
-async function myNextShifts(actor: Actor): Promise<HomeSection | null> {
+async function myNextShifts(actor: Actor, club: Club): Promise<HomeSection | null> {
   if (!can(actor, "shifts.signUp")) return null;
-  const [shifts, { timeZone }] = await Promise.all([listMyShifts(actor, { from: new Date() }), getClubSettings()]);
+  const shifts = await listMyShifts(actor, { from: new Date() });
   return {
     heading: "Your next shifts",
     emptyText: "You have no shifts coming up. Antenna days list the shifts that need operators.",
     things: shifts.slice(0, 5).map((shift) => ({
-      title: `${shift.slotName}, ${formatRangeInZone(shift.startsAt, shift.endsAt, timeZone)}`,
+      title: `${shift.slotName}, ${formatRangeInZone(shift.startsAt, shift.endsAt, club.timeZone)}`,
       detail: shift.dayTitle,
       href: `/antenna-days/${shift.dayId}#slot-${shift.slotId}`,
     })),
   };
 }
 
-async function nextBuildSession(actor: Actor): Promise<HomeSection | null> {
+async function nextBuildSession(actor: Actor, club: Club): Promise<HomeSection | null> {
   if (!can(actor, "buildSessions.view")) return null;
-  const [session, club] = await Promise.all([myNextBuildSession(actor), getClubSettings()]);
+  const session = await myNextBuildSession(actor);
   const place = session?.myPlace?.status === "waitlisted" ? `number ${session.myPlace.position} on the waitlist` : "you have a place";
   return {
     heading: "Your next build session",
@@ -61,9 +66,9 @@ async function nextBuildSession(actor: Actor): Promise<HomeSection | null> {
   };
 }
 
-async function buildSessionsIMentor(actor: Actor): Promise<HomeSection | null> {
+async function buildSessionsIMentor(actor: Actor, club: Club): Promise<HomeSection | null> {
   if (!actor.isMentor || !can(actor, "buildSessions.view")) return null;
-  const [sessions, club] = await Promise.all([sessionsIMentor(actor), getClubSettings()]);
+  const sessions = await sessionsIMentor(actor);
   return {
     heading: "Build sessions you mentor",
     emptyText: "You are not mentoring an upcoming build session.",
@@ -75,26 +80,33 @@ async function buildSessionsIMentor(actor: Actor): Promise<HomeSection | null> {
   };
 }
 
-async function draftAntennaDays(actor: Actor): Promise<HomeSection | null> {
+async function draftAntennaDays(actor: Actor, club: Club): Promise<HomeSection | null> {
   if (!can(actor, "antennaDays.viewDrafts")) return null;
-  const [days, { timeZone }] = await Promise.all([listDays(actor), getClubSettings()]);
+  const days = await listDays(actor, {}, club);
   return {
     heading: "Antenna days still in draft",
     emptyText: "No drafts: every planned antenna day is published.",
     things: days
       .filter((day) => day.status === "draft")
-      .map((day) => ({ title: day.title, detail: `${formatInZone(day.startsAt, timeZone, "date")} · not yet published`, href: `/antenna-days/${day.id}` })),
+      .map((day) => ({ title: day.title, detail: `${formatInZone(day.startsAt, club.timeZone, "date")} · not yet published`, href: `/antenna-days/${day.id}` })),
   };
 }
 
+/**
+ * The sections in order of urgency: overdue gear and the lending desk's queue first, then the
+ * person's own next shifts and sessions, then what waits for a coordinator. Sections with
+ * something in them come before empty ones, each group keeping that order.
+ */
 export async function whatNeedsMeNext(actor: Actor): Promise<HomeSection[]> {
+  const club = await getClubSettings();
   const sections = await Promise.all([
+    lendingHomeSections(actor, club.timeZone),
+    myNextShifts(actor, club),
+    nextBuildSession(actor, club),
+    buildSessionsIMentor(actor, club),
     membersAwaitingConfirmation(actor),
-    myNextShifts(actor),
-    nextBuildSession(actor),
-    buildSessionsIMentor(actor),
-    draftAntennaDays(actor),
-    lendingHomeSections(actor),
+    draftAntennaDays(actor, club),
   ]);
-  return sections.flat().filter((section): section is HomeSection => section !== null);
+  const shown = sections.flat().filter((section): section is HomeSection => section !== null);
+  return [...shown.filter((section) => section.things.length > 0), ...shown.filter((section) => section.things.length === 0)];
 }

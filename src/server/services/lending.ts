@@ -10,7 +10,8 @@
 //   concurrency, because every booking write locks the item's row and the constraint backs it.
 // - When held time is released (cancel, decline, early return), the first people in line whose
 //   wanted time is now free get an offer that holds the time for them until it lapses.
-// Service functions return what happened (who was offered what) so a message can be sent later.
+// Service functions return what happened (who was offered what); the messages of each step go
+// out through lending-messages.ts inside the same transaction.
 import { and, asc, count, desc, eq, gt, inArray, lte, ne, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import Papa from "papaparse";
@@ -20,6 +21,7 @@ import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } fr
 import { can, canCancelFor, canCoSignLoan, canReturnLoan, canSeeBooking, loanNeedsCoSign, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
 import { itemFileUrl, recordHistory } from "@/server/services/gear";
+import { tellBookingApproved, tellBookingStep, tellOffers } from "@/server/services/lending-messages";
 import { gearKindLabels } from "@/lib/gear/kinds";
 import { isDueSoon, isFree, isOverdue, nextFreeStart, offerExpiry, pickOffers, rangeProblem, type Interval } from "@/lib/lending/availability";
 import { HAND_OUT_LEAD_HOURS } from "@/lib/lending/next-action";
@@ -254,6 +256,7 @@ async function createBooking(tx: Transaction, input: NewBooking): Promise<{ book
       note: input.approvedBy ? null : "Approved at once: the item was free (first come, first served).",
       at: now,
     });
+    await tellBookingApproved(tx, booking.id);
   }
   return { bookingId: booking.id, outcome: approveNow ? "approved" : coSignRequired ? "awaiting-co-sign" : "requested" };
 }
@@ -364,7 +367,10 @@ export async function stepBooking(actor: Actor, id: string, step: BookingStepInp
         if (!move.ok) throw conflict(move.message);
         const offered = await settleOffersOf(tx, item, now);
         const changes = await stepChanges(tx, actor, item, booking, step, { now, timeZone });
-        await tx.update(gearBookings).set({ ...changes, state: move.to, updatedAt: now }).where(eq(gearBookings.id, id));
+        await tx
+          .update(gearBookings)
+          .set({ ...changes, state: move.to, sequence: sql`${gearBookings.sequence} + 1`, updatedAt: now })
+          .where(eq(gearBookings.id, id));
         await recordHistory(tx, {
           itemId: item.id,
           bookingId: id,
@@ -377,6 +383,7 @@ export async function stepBooking(actor: Actor, id: string, step: BookingStepInp
           fileId: step.action === "return" ? (step.photoFileId ?? null) : null,
           at: now,
         });
+        await tellBookingStep(tx, id, step.action);
         if (releasesTime(booking.state, move.to)) offered.push(...(await settleOffersOf(tx, item, now)));
         return { booking: await bookingDto(tx, id), offered };
       }),
@@ -491,6 +498,7 @@ async function settleOffersOf(tx: Transaction, item: GearItemRow, now: Date): Pr
       expiresAt: expiresAt.toISOString(),
     });
   }
+  await tellOffers(tx, notices);
   return notices;
 }
 
@@ -846,10 +854,14 @@ export async function listBorrowers(actor: Actor): Promise<{ id: string; name: s
     .orderBy(asc(users.name));
 }
 
-/** The lending desk's part of the home page: due and overdue loans, offers, co-signs, the keepers' queues. */
-export async function lendingHomeSections(actor: Actor, now = new Date()): Promise<{ heading: string; emptyText: string; things: { title: string; detail?: string; href: string }[] }[]> {
+/** The lending desk's part of the home page, overdue things first: your gear, the keepers' desk, co-signs. */
+export async function lendingHomeSections(
+  actor: Actor,
+  timeZone: string,
+  now = new Date(),
+): Promise<{ heading: string; emptyText: string; things: { title: string; detail?: string; href: string }[] }[]> {
   if (!can(actor, "loans.request")) return [];
-  const [desk, { timeZone }] = await Promise.all([lendingDesk(actor, now), getClubSettings()]);
+  const desk = await lendingDesk(actor, now);
   const when = (iso: string) => formatInZone(iso, timeZone);
   const sections = [];
   const mine = desk.mine.filter((booking) => booking.state === "out" && (booking.overdue || isDueSoon({ state: booking.state, endsAt: new Date(booking.endsAt) }, now)));
@@ -867,13 +879,6 @@ export async function lendingHomeSections(actor: Actor, now = new Date()): Promi
       })),
     ],
   });
-  if (desk.toCoSign.length > 0) {
-    sections.push({
-      heading: "Newcomers waiting for a mentor",
-      emptyText: "",
-      things: desk.toCoSign.map((booking) => ({ title: `Co-sign ${booking.borrowerName}'s request for ${booking.itemLabelCode}`, detail: formatRangeInZone(booking.startsAt, booking.endsAt, timeZone), href: `/gear/${booking.itemId}` })),
-    });
-  }
   if (can(actor, "loans.manage")) {
     sections.push({
       heading: "The lending desk",
@@ -886,6 +891,13 @@ export async function lendingHomeSections(actor: Actor, now = new Date()): Promi
           href: "/lending",
         })),
       ],
+    });
+  }
+  if (desk.toCoSign.length > 0) {
+    sections.push({
+      heading: "Newcomers waiting for a mentor",
+      emptyText: "",
+      things: desk.toCoSign.map((booking) => ({ title: `Co-sign ${booking.borrowerName}'s request for ${booking.itemLabelCode}`, detail: formatRangeInZone(booking.startsAt, booking.endsAt, timeZone), href: `/gear/${booking.itemId}` })),
     });
   }
   return sections;

@@ -1,10 +1,10 @@
 // The plan library: antenna plans saved under a name, listed with where they are used (the
-// station slots that point at them), changed or deleted by whoever saved them or a
-// coordinator, and deleted only while no slot uses them.
+// station slots and build sessions that point at them), changed or deleted by whoever saved
+// them or a coordinator, and deleted only while nothing uses them.
 import { and, asc, count, eq, inArray, sql } from "drizzle-orm";
 import type { PlanRequest } from "@/lib/antenna/plan-schema";
 import { db } from "@/server/db";
-import { antennaDays, antennaPlans, stationSlots, users, type AntennaPlanRow } from "@/server/db/schema";
+import { antennaDays, antennaPlans, buildSessions, stationSlots, users, type AntennaPlanRow } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgConstraint, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, canEditLibraryPlan, type Actor } from "@/server/policy";
 import { visibleStatuses } from "@/server/services/antenna-days";
@@ -20,7 +20,7 @@ export interface LibraryPlanDto {
   createdBy: { id: string; name: string } | null;
   createdAt: string;
   updatedAt: string;
-  /** Station slots using the plan, on days the person may see. */
+  /** Station slots (on days the person may see) and build sessions using the plan. */
   usageCount: number;
   /** Whether the person asking may change or delete it. */
   canEdit: boolean;
@@ -35,8 +35,16 @@ export interface PlanUsage {
   dayStatus: string;
 }
 
+export interface PlanSessionUsage {
+  sessionId: string;
+  title: string;
+  startsAt: string;
+  status: string;
+}
+
 export interface LibraryPlanDetail extends LibraryPlanDto {
   usage: PlanUsage[];
+  buildSessions: PlanSessionUsage[];
 }
 
 type PlanJoinRow = { plan: AntennaPlanRow; creatorName: string | null };
@@ -59,16 +67,27 @@ function toDto(actor: Actor, { plan, creatorName }: PlanJoinRow, usageCount: num
 const selectPlans = () =>
   db().select({ plan: antennaPlans, creatorName: users.name }).from(antennaPlans).leftJoin(users, eq(users.id, antennaPlans.createdBy));
 
-/** Slots per plan, counting only days the person may see (drafts are the coordinators'). */
+/** Uses per plan: slots on days the person may see (drafts are the coordinators') and build sessions. */
 async function usageCounts(actor: Actor, planIds: string[]): Promise<Map<string, number>> {
   if (planIds.length === 0) return new Map();
-  const rows = await db()
-    .select({ planId: stationSlots.libraryPlanId, slots: count() })
-    .from(stationSlots)
-    .innerJoin(antennaDays, eq(antennaDays.id, stationSlots.dayId))
-    .where(and(inArray(stationSlots.libraryPlanId, planIds), inArray(antennaDays.status, visibleStatuses(actor))))
-    .groupBy(stationSlots.libraryPlanId);
-  return new Map(rows.map((row) => [row.planId as string, row.slots]));
+  const [slots, sessions] = await Promise.all([
+    db()
+      .select({ planId: stationSlots.libraryPlanId, uses: count() })
+      .from(stationSlots)
+      .innerJoin(antennaDays, eq(antennaDays.id, stationSlots.dayId))
+      .where(and(inArray(stationSlots.libraryPlanId, planIds), inArray(antennaDays.status, visibleStatuses(actor))))
+      .groupBy(stationSlots.libraryPlanId),
+    can(actor, "buildSessions.view")
+      ? db()
+          .select({ planId: buildSessions.libraryPlanId, uses: count() })
+          .from(buildSessions)
+          .where(inArray(buildSessions.libraryPlanId, planIds))
+          .groupBy(buildSessions.libraryPlanId)
+      : [],
+  ]);
+  const counts = new Map<string, number>();
+  for (const row of [...slots, ...sessions]) counts.set(row.planId as string, (counts.get(row.planId as string) ?? 0) + row.uses);
+  return counts;
 }
 
 async function findPlan(id: string): Promise<PlanJoinRow> {
@@ -109,9 +128,17 @@ export async function getLibraryPlan(actor: Actor, id: string): Promise<LibraryP
     .innerJoin(antennaDays, eq(antennaDays.id, stationSlots.dayId))
     .where(and(eq(stationSlots.libraryPlanId, id), inArray(antennaDays.status, visibleStatuses(actor))))
     .orderBy(asc(antennaDays.startsAt), asc(stationSlots.name));
+  const sessions = can(actor, "buildSessions.view")
+    ? await db()
+        .select({ sessionId: buildSessions.id, title: buildSessions.title, startsAt: buildSessions.startsAt, status: buildSessions.status })
+        .from(buildSessions)
+        .where(eq(buildSessions.libraryPlanId, id))
+        .orderBy(asc(buildSessions.startsAt))
+    : [];
   return {
-    ...toDto(actor, row, usage.length),
+    ...toDto(actor, row, usage.length + sessions.length),
     usage: usage.map((use) => ({ ...use, dayStartsAt: use.dayStartsAt.toISOString() })),
+    buildSessions: sessions.map((session) => ({ ...session, startsAt: session.startsAt.toISOString() })),
   };
 }
 
@@ -146,18 +173,22 @@ export async function updateLibraryPlan(actor: Actor, id: string, patch: Library
   return getLibraryPlan(actor, id);
 }
 
-/** Deletes a plan no station slot uses (on any day, drafts included). */
+/** Deletes a plan that no station slot (on any day, drafts included) and no build session uses. */
 export async function deleteLibraryPlan(actor: Actor, id: string): Promise<void> {
   if (!can(actor, "plans.save")) throw forbidden();
   const { plan } = await findPlan(id);
   if (!canEditLibraryPlan(actor, plan.createdBy)) throw forbidden("Only the person who saved this plan, or a coordinator, may delete it.");
-  const inUse = () => conflict("This plan is used by station slots. Point those slots at another plan first.");
-  const [{ slots }] = await db().select({ slots: count() }).from(stationSlots).where(eq(stationSlots.libraryPlanId, id));
-  if (slots > 0) throw inUse();
+  const inUse = () =>
+    conflict("This plan is used by station slots or build sessions (see where it is used). Point them at another plan first, or keep this one.");
+  const [[{ slots }], [{ sessions }]] = await Promise.all([
+    db().select({ slots: count() }).from(stationSlots).where(eq(stationSlots.libraryPlanId, id)),
+    db().select({ sessions: count() }).from(buildSessions).where(eq(buildSessions.libraryPlanId, id)),
+  ]);
+  if (slots > 0 || sessions > 0) throw inUse();
   try {
     await db().delete(antennaPlans).where(eq(antennaPlans.id, id));
   } catch (error) {
-    // A slot took the plan between the count and the delete: the foreign key refuses.
+    // A slot or a session took the plan between the count and the delete: the foreign keys refuse.
     if (pgErrorCode(error) === pgErrorCodes.foreignKeyViolation) throw inUse();
     throw error;
   }

@@ -2,12 +2,14 @@
 // The database keeps the rules under concurrent sign-ups: `taken <= capacity` (a check, bumped
 // with `where taken < capacity`), one sign-up per person and shift (a unique index), and one
 // shift at a time per person (an exclusion constraint over the person and the time range).
+// A coordinator who removes someone's shift (deleting it, or taking the person off) tells them.
 import { and, asc, eq, gt, inArray, lt, sql } from "drizzle-orm";
 import { db, type Executor } from "@/server/db";
 import { antennaDays, shifts, shiftSignups, stationSlots, users, type AntennaDayRow, type ShiftRow } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgConstraint, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, canCancelFor, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
+import { tellSignUpsRemoved } from "@/server/services/antenna-day-messages";
 import { findEditableDay, findVisibleDay, visibleStatuses, type PersonRef } from "@/server/services/antenna-days";
 import { instantToWallTime, wallTimeToInstant } from "@/lib/time";
 import type { ShiftInput } from "@/validations/antenna-days";
@@ -168,6 +170,7 @@ export async function deleteShift(actor: Actor, shiftId: string): Promise<void> 
   await db().transaction(async (tx) => {
     const { dayId } = await shiftWithDay(tx, shiftId);
     await findEditableDay(actor, dayId, tx, true);
+    await tellSignUpsRemoved(tx, eq(shiftSignups.shiftId, shiftId));
     await tx.delete(shifts).where(eq(shifts.id, shiftId));
   });
 }
@@ -212,9 +215,11 @@ export async function cancelSignUp(actor: Actor, shiftId: string, personId = act
   await db().transaction(async (tx) => {
     const { dayId } = await shiftWithDay(tx, shiftId);
     await findVisibleDay(actor, dayId, tx);
+    const theirs = and(eq(shiftSignups.shiftId, shiftId), eq(shiftSignups.personId, personId));
+    if (personId !== actor.id) await tellSignUpsRemoved(tx, theirs!);
     const [removed] = await tx
       .delete(shiftSignups)
-      .where(and(eq(shiftSignups.shiftId, shiftId), eq(shiftSignups.personId, personId)))
+      .where(theirs)
       .returning({ id: shiftSignups.id });
     if (!removed) throw notFound("That sign-up");
     await tx

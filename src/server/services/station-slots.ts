@@ -13,11 +13,12 @@ import type { AntennaSummary } from "@/lib/site-plan/footprint";
 import type { BandRange } from "@/lib/site-plan/checks";
 import { formatPath } from "@/server/api";
 import { db, type Executor } from "@/server/db";
-import { sites, stationSlots, type AntennaDayRow, type SiteRow, type StationSlotRow } from "@/server/db/schema";
+import { shifts, sites, stationSlots, type AntennaDayRow, type SiteRow, type StationSlotRow } from "@/server/db/schema";
 import { runPlan } from "@/server/engine/run";
 import { badInput, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
+import { tellSignUpsRemoved } from "@/server/services/antenna-day-messages";
 import { findEditableDay, findVisibleDay, getDay, type DayDto } from "@/server/services/antenna-days";
 import { listShifts, type ShiftDto } from "@/server/services/shifts";
 import { toSiteDto, type SiteDto } from "@/server/services/sites";
@@ -215,6 +216,8 @@ export async function deleteSlot(actor: Actor, slotId: string): Promise<void> {
   const current = await findSlotRow(db(), slotId);
   await db().transaction(async (tx) => {
     await findEditableDay(actor, current.dayId, tx, true);
+    // Its shifts go with it: tell the people signed up for them.
+    await tellSignUpsRemoved(tx, eq(shifts.slotId, slotId));
     await tx.delete(stationSlots).where(eq(stationSlots.id, slotId));
   });
 }

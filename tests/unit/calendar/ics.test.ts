@@ -1,6 +1,6 @@
 import ICAL from "ical.js";
 import { describe, expect, it } from "vitest";
-import { antennaDayEvent, buildSessionEvent } from "@/lib/calendar/events";
+import { LOAN_RETURN_MINUTES, antennaDayEvent, buildSessionEvent, loanDueEvent, shiftEvent } from "@/lib/calendar/events";
 import { buildCalendar, icsFileName } from "@/lib/calendar/ics";
 
 const base = { title: "Build a 40 m end-fed", place: "Hall", mentorNames: ["Ada"], cancelled: false, sequence: 0, updatedAt: new Date("2026-02-01T10:00:00Z") };
@@ -47,6 +47,45 @@ describe("iCalendar files", () => {
     expect(vevent.getFirstPropertyValue("status")).toBe("CANCELLED");
     expect(ics).toMatch(/\r\nDTSTAMP:20260601T120000Z\r\n/);
     expect(ics).toMatch(/\r\nDTSTART;TZID=Europe\/London:20260613T090000\r\n/);
+  });
+
+  it("give a shift of a cancelled day STATUS:CANCELLED, its own UID and the sequence it is given", () => {
+    // Source: RFC 5545 §3.8.1.11 (STATUS:CANCELLED), §3.8.4.7 (UID), §3.8.7.4 (SEQUENCE).
+    const shift = shiftEvent(
+      {
+        id: "s1",
+        dayId: "d1",
+        dayName: "Summer day",
+        slotId: "t1",
+        stationName: "Station 2",
+        bands: ["40m"],
+        startsAt: new Date("2026-06-13T08:00:00Z"),
+        endsAt: new Date("2026-06-13T10:00:00Z"),
+        siteName: "Field",
+        cancelled: true,
+        sequence: 5,
+        updatedAt: new Date("2026-06-02T12:00:00Z"),
+      },
+      "https://g.example",
+    );
+    const vevent = parse(buildCalendar({ name: "Test", timeZone: "Europe/London", events: [shift] })).getFirstSubcomponent("vevent")!;
+    expect(vevent.getFirstPropertyValue("uid")).toBe("shift-s1@guyline");
+    expect(vevent.getFirstPropertyValue("sequence")).toBe(5);
+    expect(vevent.getFirstPropertyValue("status")).toBe("CANCELLED");
+    expect(vevent.getFirstPropertyValue("url")).toBe("https://g.example/antenna-days/d1#slot-t1");
+  });
+
+  it("end a loan's due-date event at the due time, after its start", () => {
+    // Source: RFC 5545 §3.8.2.2 (DTEND of a VEVENT is later than DTSTART).
+    const loan = loanDueEvent(
+      { bookingId: "b1", itemLabelCode: "AN-01", itemName: "Analyser", dueAt: new Date("2026-06-14T17:00:00Z"), cancelled: false, sequence: 2, updatedAt: new Date("2026-06-01T12:00:00Z"), location: "Shed" },
+      "https://g.example",
+    );
+    const event = new ICAL.Event(parse(buildCalendar({ name: "Test", timeZone: "Europe/London", events: [loan] })).getFirstSubcomponent("vevent")!);
+    expect(event.uid).toBe("loan-b1@guyline");
+    expect(event.endDate.toString()).toBe("2026-06-14T18:00:00");
+    expect(event.endDate.toJSDate().getTime() - event.startDate.toJSDate().getTime()).toBe(LOAN_RETURN_MINUTES * 60_000);
+    expect(event.summary).toBe("Due back: AN-01 Analyser");
   });
 
   it("names the file after the event", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { REMINDER_HOUR, reminderWindow } from "@/lib/mail/reminder-clock";
+import { REMINDER_HOUR, clubDaysSince, reminderWindow } from "@/lib/mail/reminder-clock";
 
 describe("when reminders go out", () => {
   it("waits for the reminder hour on the club's clock", () => {
@@ -30,5 +30,27 @@ describe("when reminders go out", () => {
     const window = reminderWindow(new Date("2026-06-12T21:30:00Z"), "Pacific/Auckland")!;
     expect(window.date).toBe("2026-06-14");
     expect(window.from.toISOString()).toBe("2026-06-13T12:00:00.000Z");
+  });
+
+  it("names today's date on the club's clock, for reminders sent once a day", () => {
+    // Source: IANA Time Zone Database, Pacific/Auckland (NZST = UTC+12 in June): 21:30Z on the 12th is 09:30 on the 13th.
+    const window = reminderWindow(new Date("2026-06-12T21:30:00Z"), "Pacific/Auckland")!;
+    expect(window.today).toBe("2026-06-13");
+    expect(window.timeZone).toBe("Pacific/Auckland");
+  });
+});
+
+describe("days on the club's calendar", () => {
+  it("count dates, not 24-hour periods, in the club's zone", () => {
+    // Source: IANA Time Zone Database, Europe/London (BST = UTC+1 in June). 22:30Z on the 10th is 23:30 BST the same date.
+    expect(clubDaysSince(new Date("2026-06-10T22:30:00Z"), "2026-06-11", "Europe/London")).toBe(1);
+    // 23:30Z on the 10th is already 00:30 BST on the 11th.
+    expect(clubDaysSince(new Date("2026-06-10T23:30:00Z"), "2026-06-11", "Europe/London")).toBe(0);
+    expect(clubDaysSince(new Date("2026-06-01T12:00:00Z"), "2026-06-11", "Europe/London")).toBe(10);
+  });
+
+  it("are whole days across a daylight-saving change", () => {
+    // Source: IANA Time Zone Database, Europe/London: clocks go forward on 29 March 2026.
+    expect(clubDaysSince(new Date("2026-03-28T12:00:00Z"), "2026-03-30", "Europe/London")).toBe(2);
   });
 });

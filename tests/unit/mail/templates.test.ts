@@ -15,15 +15,18 @@ const context = (unsubscribe: boolean): MailContext => ({
 // A summer Saturday: 09:00Z is 10:00 on London's wall clock (BST).
 const startsAt = "2026-06-13T09:00:00.000Z";
 const endsAt = "2026-06-13T12:30:00.000Z";
+const day = { name: "Summer antenna day", startsAt, endsAt, siteName: "Hollow Lane field", meetingPoint: "The north gate", path: "/antenna-days/d1" };
+const shift = { dayName: "Summer antenna day", stationName: "Station 2", bands: ["40m", "20m"], startsAt, endsAt, siteName: "Hollow Lane field", path: "/antenna-days/d1" };
 const session = { title: "Build a 20 m dipole", startsAt, endsAt, place: "Village hall", mentorNames: ["Ada", "Bram"], path: "/build-sessions/abc" };
 
 const samples: { [N in TemplateName]: TemplateData<N> } = {
   invitation: { inviterName: "Ada", roleLabel: "Member", isMentor: true, acceptPath: "/invite/tok", expiresAt: endsAt },
   signInHelp: { resetPath: "/reset-password/tok", expiresAt: endsAt },
-  antennaDayPublished: { name: "Summer antenna day", startsAt, endsAt, siteName: "Hollow Lane field", path: "/antenna-days/d1", summary: "Four stations." },
-  antennaDayChanged: { name: "Summer antenna day", startsAt, endsAt, siteName: "Hollow Lane field", path: "/antenna-days/d1", changes: ["Starts an hour later"] },
-  antennaDayCancelled: { name: "Summer antenna day", startsAt, endsAt, siteName: "Hollow Lane field", path: "/antenna-days/d1", reason: "Storm warning" },
-  shiftReminder: { dayName: "Summer antenna day", stationName: "Station 2", bands: ["40m", "20m"], startsAt, endsAt, siteName: "Hollow Lane field", path: "/antenna-days/d1" },
+  antennaDayPublished: { ...day, summary: "Four stations." },
+  antennaDayChanged: { ...day, changes: ["Starts an hour later"] },
+  antennaDayCancelled: { ...day, reason: "Storm warning" },
+  shiftReminder: shift,
+  shiftRemoved: shift,
   buildSessionConfirmed: { ...session, bring: ["Wire cutters (bring)"] },
   buildSessionWaitlisted: { ...session, position: 2 },
   buildSessionPromoted: { ...session, bring: ["Wire cutters (bring)"] },
@@ -32,6 +35,7 @@ const samples: { [N in TemplateName]: TemplateData<N> } = {
   buildSessionCancelled: { ...session, reason: null },
   bookingApproved: { itemName: "Analyser A", from: startsAt, until: endsAt, path: "/lending", pickup: "Bram's shed" },
   bookingDeclined: { itemName: "Analyser A", from: startsAt, until: endsAt, path: "/lending", reason: "Out for calibration" },
+  waitlistOffer: { itemName: "Analyser A", from: startsAt, until: endsAt, path: "/lending", expiresAt: endsAt },
   itemDueTomorrow: { items: [{ name: "Coax run 20 m", dueAt: endsAt }], path: "/lending" },
   itemOverdue: { itemName: "Coax run 20 m", dueAt: startsAt, daysOverdue: 3, path: "/lending" },
   returnReceipt: { itemName: "Coax run 20 m", returnedAt: endsAt, receivedBy: "Bram", condition: "Good", notes: null, path: "/lending" },
@@ -82,9 +86,9 @@ describe("mail templates", () => {
     }
   });
 
-  it("always sends account messages and cancellations (product brief: safety-critical changes always go out)", () => {
+  it("always sends account messages, cancellations and removed shifts (product brief: safety-critical changes always go out)", () => {
     const always = names.filter((name) => mailTemplates[name].alwaysSent !== null).sort();
-    expect(always).toEqual(["antennaDayCancelled", "buildSessionCancelled", "invitation", "signInHelp"]);
+    expect(always).toEqual(["antennaDayCancelled", "buildSessionCancelled", "invitation", "shiftRemoved", "signInHelp"]);
   });
 
   it("refuses to render an optional message without its unsubscribe link", () => {
@@ -109,5 +113,10 @@ describe("mail templates", () => {
     for (const name of ["antennaDayPublished", "shiftReminder"] as const) {
       expect(render(name).content.text, name).toMatch(/Masts near power lines kill/);
     }
+  });
+
+  it("tells a waitlisted member until when an item is held for them", () => {
+    // Source: IANA Time Zone Database, Europe/London (BST = UTC+1 in June): 12:30Z is 13:30.
+    expect(render("waitlistOffer").content.text).toContain("The item is held for you until Sat, 13 Jun 2026, 13:30");
   });
 });

@@ -7,7 +7,7 @@ import { signedInAction } from "@/server/action";
 import { copyDay, createDay, deleteDay, updateDay } from "@/server/services/antenna-days";
 import { cancelSignUp, createShift, deleteShift, signUp } from "@/server/services/shifts";
 import { createSlot, deleteSlot, updateSlot } from "@/server/services/station-slots";
-import { copyDayFormSchema, daySchema, dayEditSchema, shiftFormSchema } from "@/validations/antenna-days";
+import { cancelReasonField, copyDayFormSchema, daySchema, dayEditSchema, shiftFormSchema } from "@/validations/antenna-days";
 import { slotFormSchema } from "@/validations/slot-form";
 
 const dayPath = (dayId: string) => `/antenna-days/${dayId}`;
@@ -24,11 +24,14 @@ export const updateDayAction = signedInAction(dayEditSchema, async (actor, { day
   return { ok: true, message: "The day is saved.", data: { dayId } };
 });
 
-export const changeDayStatusAction = signedInAction(z.object({ dayId: z.uuid(), status: z.enum(DAY_STATUSES) }), async (actor, { dayId, status }) => {
-  await updateDay(actor, dayId, { status });
-  revalidatePath("/antenna-days", "layout");
-  return { ok: true, message: `The day is now ${dayStatusLabels[status].toLowerCase()}.` };
-});
+export const changeDayStatusAction = signedInAction(
+  z.object({ dayId: z.uuid(), status: z.enum(DAY_STATUSES), cancelReason: cancelReasonField }),
+  async (actor, { dayId, status, cancelReason }) => {
+    await updateDay(actor, dayId, { status, cancelReason: status === "cancelled" ? cancelReason : undefined });
+    revalidatePath("/antenna-days", "layout");
+    return { ok: true, message: `The day is now ${dayStatusLabels[status].toLowerCase()}.${status === "published" ? " Every member is told by e-mail." : ""}` };
+  },
+);
 
 export const deleteDayAction = signedInAction(z.object({ dayId: z.uuid() }), async (actor, { dayId }) => {
   await deleteDay(actor, dayId);

@@ -20,13 +20,14 @@ export default async function LendingPage() {
   const keeper = can(actor, "loans.manage");
   const borrowers = can(actor, "loans.viewAll") ? await listBorrowers(actor) : null;
 
-  const list = (bookings: BookingDto[], empty: string, label: string): ReactNode =>
+  // `anchored`: each booking has an id to link to (/lending#booking-<id>, from e-mail and the calendar); one list only, ids are unique.
+  const list = (bookings: BookingDto[], empty: string, label: string, anchored = false): ReactNode =>
     bookings.length === 0 ? (
       <p className="text-slate-600">{empty}</p>
     ) : (
       <ul className="divide-y divide-slate-200" aria-label={label}>
         {bookings.map((booking) => (
-          <li key={booking.id} className="py-3" data-testid={`booking-${booking.itemLabelCode}`}>
+          <li key={booking.id} id={anchored ? `booking-${booking.id}` : undefined} className="scroll-mt-4 py-3" data-testid={`booking-${booking.itemLabelCode}`}>
             <p>
               <StateBadge state={booking.state} overdue={booking.overdue} />{" "}
               <Link href={`/gear/${booking.itemId}`} className="font-bold">
@@ -77,7 +78,7 @@ export default async function LendingPage() {
         </>
       )}
       {desk.toCoSign.length > 0 && <Card title="Newcomers' requests to co-sign">{list(desk.toCoSign, "", "Requests to co-sign")}</Card>}
-      <Card title="Your bookings">{list(desk.mine, "You have no bookings. Find something on the gear shelf.", "Your bookings")}</Card>
+      <Card title="Your bookings">{list(desk.mine, "You have no bookings. Find something on the gear shelf.", "Your bookings", true)}</Card>
       {waiting.length > 0 && (
         <Card title="You are waiting for">
           <ul className="divide-y divide-slate-200">

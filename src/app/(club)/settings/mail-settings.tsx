@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { CheckboxField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import type { ActionResult } from "@/server/action";
-import { mailCategoryLabels, optionalMailCategories, type OptionalMailCategory } from "@/lib/mail/categories";
+import { alwaysSentSummary, mailCategoryLabels, optionalMailCategories, type OptionalMailCategory } from "@/lib/mail/categories";
 import { mailChoicesSchema } from "@/validations/mail";
 import { renewFeedAction, revokeFeedAction, updateMailChoicesAction } from "./actions";
 
@@ -19,9 +19,7 @@ export function MailChoicesForm({ defaults }: { defaults: Record<OptionalMailCat
       {optionalMailCategories.map((category) => (
         <CheckboxField key={category} label={mailCategoryLabels[category]} {...form.register(category)} />
       ))}
-      <p className="mb-4 text-sm text-slate-600">
-        Always sent, whatever you choose: invitations and sign-in help, and the news that an antenna day or a build session you signed up for is cancelled.
-      </p>
+      <p className="mb-4 text-sm text-slate-600">{alwaysSentSummary}</p>
       <Button type="submit" disabled={submitting}>
         Save my e-mail choices
       </Button>

@@ -1,4 +1,5 @@
-// Antenna days and shifts. A cancelled antenna day is always sent: people travel to the site.
+// Antenna days and shifts. A cancelled antenna day and a removed shift are always sent: people
+// travel to the site.
 import type { MailBlock } from "../layout";
 import { defineTemplate, when } from "./define";
 
@@ -7,6 +8,7 @@ export interface AntennaDayData {
   startsAt: string;
   endsAt: string;
   siteName: string;
+  meetingPoint: string | null;
   /** /antenna-days/<id> */
   path: string;
 }
@@ -22,7 +24,10 @@ const fieldCautions: MailBlock = {
 };
 
 function dayFacts(data: AntennaDayData, context: Parameters<typeof when>[2]): MailBlock {
-  return { kind: "facts", rows: [["When", when(data.startsAt, data.endsAt, context)], ["Where", data.siteName]] };
+  return {
+    kind: "facts",
+    rows: [["When", when(data.startsAt, data.endsAt, context)], ["Where", data.siteName], ...(data.meetingPoint ? [["Meeting point", data.meetingPoint] as const] : [])],
+  };
 }
 
 export const antennaDayPublished = defineTemplate<AntennaDayData & { summary: string | null }>({
@@ -65,7 +70,7 @@ export const antennaDayCancelled = defineTemplate<AntennaDayData & { reason: str
       { kind: "paragraph", text: "Do not travel to the site for this antenna day: it will not take place." },
       dayFacts(data, context),
       ...(data.reason ? [{ kind: "paragraph", text: `The coordinator's note: ${data.reason}` } as const] : []),
-      { kind: "paragraph", text: "Shifts and gear bookings for the day are cancelled with it." },
+      { kind: "paragraph", text: "Shifts for the day are cancelled with it. If you booked gear for the day, cancel the booking on the lending desk so that others can use the item." },
       { kind: "action", label: "See the club's antenna days", path: "/antenna-days" },
     ],
   }),
@@ -101,6 +106,28 @@ export const shiftReminder = defineTemplate<ShiftReminderData>({
       },
       { kind: "action", label: "See the station and the site plan", path: data.path },
       fieldCautions,
+    ],
+  }),
+});
+
+export const shiftRemoved = defineTemplate<ShiftReminderData>({
+  category: "shifts",
+  alwaysSent: "a shift taken off your plans changes whether you travel to the site.",
+  body: (data, context) => ({
+    subject: `Shift removed: ${data.stationName}, ${data.dayName}`,
+    heading: `Your shift at ${data.stationName} is removed`,
+    blocks: [
+      { kind: "paragraph", text: `A coordinator removed your shift at ${data.dayName}. You are no longer down to operate it.` },
+      {
+        kind: "facts",
+        rows: [
+          ["When", when(data.startsAt, data.endsAt, context)],
+          ["Station", data.stationName],
+          ["Where", data.siteName],
+        ],
+      },
+      { kind: "paragraph", text: "Other shifts of the day may still need operators." },
+      { kind: "action", label: "See the antenna day", path: data.path },
     ],
   }),
 });

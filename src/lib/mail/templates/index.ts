@@ -2,7 +2,7 @@
 // and that template's data; wiring a new trigger is one call.
 import type { MailTemplate } from "./define";
 import { invitation, signInHelp } from "./account";
-import { antennaDayCancelled, antennaDayChanged, antennaDayPublished, shiftReminder } from "./antenna-days";
+import { antennaDayCancelled, antennaDayChanged, antennaDayPublished, shiftReminder, shiftRemoved } from "./antenna-days";
 import {
   buildSessionCancelled,
   buildSessionChanged,
@@ -11,7 +11,7 @@ import {
   buildSessionReminder,
   buildSessionWaitlisted,
 } from "./build-sessions";
-import { bookingApproved, bookingDeclined, itemDueTomorrow, itemOverdue, returnReceipt } from "./lending";
+import { bookingApproved, bookingDeclined, itemDueTomorrow, itemOverdue, returnReceipt, waitlistOffer } from "./lending";
 
 export const mailTemplates = {
   invitation,
@@ -20,6 +20,7 @@ export const mailTemplates = {
   antennaDayChanged,
   antennaDayCancelled,
   shiftReminder,
+  shiftRemoved,
   buildSessionConfirmed,
   buildSessionWaitlisted,
   buildSessionPromoted,
@@ -28,6 +29,7 @@ export const mailTemplates = {
   buildSessionCancelled,
   bookingApproved,
   bookingDeclined,
+  waitlistOffer,
   itemDueTomorrow,
   itemOverdue,
   returnReceipt,

@@ -1,4 +1,5 @@
-// The lending desk: bookings, due dates, overdue items and receipts.
+// The lending desk: bookings, waitlist offers, due dates, overdue items and receipts. All are the
+// member's choice (the "lending" category): the desk and the home page show the same facts.
 import { at, defineTemplate } from "./define";
 
 export interface BookingData {
@@ -42,6 +43,23 @@ export const bookingDeclined = defineTemplate<BookingData & { reason: string | n
       ...(data.reason ? [{ kind: "paragraph", text: `The steward's note: ${data.reason}` } as const] : []),
       { kind: "paragraph", text: "The lending desk shows when the item is free again, and similar items you could borrow instead." },
       { kind: "action", label: "Open the lending desk", path: data.path },
+    ],
+  }),
+});
+
+export const waitlistOffer = defineTemplate<BookingData & { expiresAt: string }>({
+  category: "lending",
+  alwaysSent: null,
+  body: (data, context) => ({
+    subject: `Free for you: ${data.itemName}`,
+    heading: `${data.itemName} came free for the time you waited for`,
+    blocks: [
+      {
+        kind: "paragraph",
+        text: `The item is held for you until ${at(data.expiresAt, context)}. Accept the offer on the lending desk before then, or it goes to the next in line.`,
+      },
+      { kind: "facts", rows: [["Item", data.itemName], ["From", at(data.from, context)], ["Back by", at(data.until, context)]] },
+      { kind: "action", label: "Accept or pass it on", path: data.path },
     ],
   }),
 });

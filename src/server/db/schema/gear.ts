@@ -129,6 +129,8 @@ export const gearBookings = pgTable(
     antennaDayId: uuid("antenna_day_id").references(() => antennaDays.id, { onDelete: "restrict" }),
     /** The station slot it serves; a removed slot leaves the booking with its day. */
     stationSlotId: uuid("station_slot_id").references(() => stationSlots.id, { onDelete: "set null" }),
+    /** Rises on every step of the booking (iCalendar SEQUENCE of its due date in calendar feeds). */
+    sequence: integer("sequence").notNull().default(0),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -137,6 +139,7 @@ export const gearBookings = pgTable(
     index("gear_bookings_borrower_idx").on(table.borrowerId),
     index("gear_bookings_state_idx").on(table.state, table.endsAt),
     check("gear_bookings_ends_after_start", sql`${table.endsAt} > ${table.startsAt}`),
+    check("gear_bookings_sequence", sql`${table.sequence} >= 0`),
     check("gear_bookings_slot_needs_day", sql`${table.stationSlotId} is null or ${table.antennaDayId} is not null`),
     check(
       "gear_bookings_co_sign_before_approval",

@@ -4,7 +4,7 @@ import { DayActions } from "@/components/antenna-days/day-actions";
 import { AddShiftForm, ShiftList } from "@/components/antenna-days/shift-list";
 import { SitePlan, type PlanSlot } from "@/components/antenna-days/site-plan";
 import { DayStatusBadge } from "@/components/antenna-days/status-badge";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink, buttonClass } from "@/components/ui/button";
 import { Card, EmptyState, Notice, PageHeader } from "@/components/ui/notice";
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
 import { MODE_DUTY } from "@/lib/antenna/exposure";
@@ -79,6 +79,10 @@ export default async function AntennaDayPage({ params }: { params: Promise<{ day
     <>
       <PageHeader title={day.title}>
         <DayStatusBadge status={day.status} />
+        {/* A plain link: the file is a download, not a page. */}
+        <a className={buttonClass("secondary")} href={`/api/antenna-days/${day.id}/ics`} download>
+          Add to my calendar (.ics)
+        </a>
       </PageHeader>
       {can(actor, "antennaDays.manage") && (
         <div className="mb-6">

@@ -21,7 +21,7 @@ export default async function PlanLibraryPage() {
         </ButtonLink>
       </PageHeader>
       <p className="mb-6 max-w-3xl text-slate-700">
-        Antenna plans saved to reuse: open one on the antenna bench, or start a station slot&apos;s plan from it. Each shows the station slots that use it.
+        Antenna plans saved to reuse: open one on the antenna bench, start a station slot&apos;s plan from it, or build it at a build session. Each shows the station slots and build sessions that use it.
       </p>
       <Card>
         {plans.length === 0 ? (
@@ -50,7 +50,7 @@ export default async function PlanLibraryPage() {
                     <td>{bandsOf(plan.parameters)}</td>
                     <td>{formatDistance(plan.parameters.heightM, member.units)}</td>
                     <td>{plan.createdBy?.name ?? "—"}</td>
-                    <td>{plan.usageCount === 0 ? "not used yet" : `${plan.usageCount} station slot${plan.usageCount === 1 ? "" : "s"}`}</td>
+                    <td>{plan.usageCount === 0 ? "not used yet" : `${plan.usageCount} place${plan.usageCount === 1 ? "" : "s"}`}</td>
                   </tr>
                 ))}
               </tbody>

@@ -56,7 +56,17 @@ export default async function BuildSessionPage({ params }: { params: Promise<{ i
             <dt className="font-bold text-slate-600">Mentors</dt>
             <dd>{session.mentors.map((mentor) => mentor.name).join(", ")}</dd>
             <dt className="font-bold text-slate-600">Antenna</dt>
-            <dd>{planResult.label}</dd>
+            <dd>
+              {planResult.label}
+              {session.libraryPlan && (
+                <>
+                  {" "}
+                  <span className="text-sm">
+                    (from the plan library: <Link href={`/bench/library/${session.libraryPlan.id}`}>{session.libraryPlan.name}</Link>)
+                  </span>
+                </>
+              )}
+            </dd>
           </dl>
           {session.notes && <p className="mt-3 whitespace-pre-line">{session.notes}</p>}
           <div className="mt-3">

@@ -21,7 +21,7 @@ export default async function NewBuildSessionPage() {
           choices={choices}
           action={createBuildSessionAction}
           submitLabel="Schedule the session"
-          defaults={{ title: "", place: "", startsAt: "", endsAt: "", capacity: 6, raisesMast: false, mentorIds: [], notes: "", plan: formPlanValues(club.ituRegion) }}
+          defaults={{ title: "", place: "", startsAt: "", endsAt: "", capacity: 6, raisesMast: false, mentorIds: [], notes: "", libraryPlanId: "", plan: formPlanValues(club.ituRegion) }}
         />
       </Card>
     </>

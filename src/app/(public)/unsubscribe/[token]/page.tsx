@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { mailCategoryTopics } from "@/lib/mail/categories";
+import { alwaysSentSummary, mailCategoryTopics } from "@/lib/mail/categories";
 import { readUnsubscribeToken } from "@/server/services/mail-preferences";
 import { UnsubscribeButton } from "./unsubscribe-button";
 
@@ -26,7 +26,7 @@ export default async function UnsubscribePage({ params }: { params: Promise<{ to
     <>
       <h1 className="mb-2">E-mails about {topic}</h1>
       <p className="mb-4 text-slate-700">
-        For <strong>{claim.email}</strong>. Cancellations of antenna days and build sessions you signed up for, and sign-in help, are always sent.
+        For <strong>{claim.email}</strong>. {alwaysSentSummary}
       </p>
       <UnsubscribeButton token={token} topic={topic} subscribed={claim.subscribed} />
       <p className="mt-4 text-sm">

@@ -39,7 +39,7 @@ export function LibraryPlanEditor({ id, name, notes, inUse }: { id: string; name
       <div className="mt-6 border-t border-slate-200 pt-4">
         {deleteMessage && <Notice tone="danger">{deleteMessage}</Notice>}
         {inUse ? (
-          <p className="text-sm text-slate-700">Station slots use this plan, so it cannot be deleted.</p>
+          <p className="text-sm text-slate-700">Station slots or build sessions use this plan, so it cannot be deleted.</p>
         ) : (
           <Button variant="danger" onClick={remove}>
             Delete this plan

@@ -38,17 +38,33 @@ export default async function LibraryPlanPage({ params }: { params: Promise<{ pl
           )}
         </div>
         <Card title="Where it is used">
-          {plan.usage.length === 0 ? (
-            <EmptyState title="No station slot uses this plan yet">A coordinator can start a slot&apos;s plan from it on the slot&apos;s plan page.</EmptyState>
+          {plan.usage.length === 0 && plan.buildSessions.length === 0 ? (
+            <EmptyState title="Nothing uses this plan yet">
+              A coordinator can start a slot&apos;s plan from it on the slot&apos;s plan page, or choose it for a build session.
+            </EmptyState>
           ) : (
-            <ul className="space-y-2" aria-label="Station slots using this plan">
-              {plan.usage.map((use) => (
-                <li key={use.slotId}>
-                  <Link href={`/antenna-days/${use.dayId}/slots/${use.slotId}/plan`}>{use.slotName}</Link> on{" "}
-                  <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({use.dayStartsAt.slice(0, 10)}, {use.dayStatus})
-                </li>
-              ))}
-            </ul>
+            <>
+              {plan.usage.length > 0 && (
+                <ul className="mb-4 space-y-2" aria-label="Station slots using this plan">
+                  {plan.usage.map((use) => (
+                    <li key={use.slotId}>
+                      <Link href={`/antenna-days/${use.dayId}/slots/${use.slotId}/plan`}>{use.slotName}</Link> on{" "}
+                      <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({use.dayStartsAt.slice(0, 10)}, {use.dayStatus})
+                    </li>
+                  ))}
+                </ul>
+              )}
+              {plan.buildSessions.length > 0 && (
+                <ul className="space-y-2" aria-label="Build sessions using this plan">
+                  {plan.buildSessions.map((session) => (
+                    <li key={session.sessionId}>
+                      Build session <Link href={`/build-sessions/${session.sessionId}`}>{session.title}</Link> ({session.startsAt.slice(0, 10)}
+                      {session.status === "cancelled" ? ", cancelled" : ""})
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </>
           )}
         </Card>
       </div>

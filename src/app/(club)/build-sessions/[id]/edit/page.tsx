@@ -39,7 +39,7 @@ export default async function EditBuildSessionPage({ params }: { params: Promise
             raisesMast: session.raisesMast,
             mentorIds: session.mentors.map((mentor) => mentor.id),
             notes: session.notes ?? "",
-            libraryPlanId: session.libraryPlanId,
+            libraryPlanId: session.libraryPlanId ?? "",
             antennaDayId: session.antennaDayId,
             plan: formPlanValues(club.ituRegion, session.plan),
           }}

@@ -1,0 +1,2 @@
+ALTER TABLE "gear_bookings" ADD COLUMN "sequence" integer DEFAULT 0 NOT NULL;--> statement-breakpoint
+ALTER TABLE "gear_bookings" ADD CONSTRAINT "gear_bookings_sequence" CHECK ("gear_bookings"."sequence" >= 0);
