@@ -7,7 +7,7 @@ import { timeInputPattern } from "@/lib/lending/time-input";
 const timeInput = (label: string) =>
   z.string().trim().regex(timeInputPattern, `Enter the ${label} as a date and time, like 2026-06-13T09:00.`);
 
-const note = z.preprocess(
+export const note = z.preprocess(
   (value) => (typeof value === "string" ? value.trim() : value) || undefined,
   z.string().max(1000, "Use at most 1000 characters.").optional(),
 );

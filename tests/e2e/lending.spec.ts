@@ -22,14 +22,16 @@ async function openItem(page: Page, labelCode: string) {
   await expect(page.getByRole("heading", { level: 1, name: new RegExp(`^${labelCode}`) })).toBeVisible();
 }
 
-test("a member borrows an analyser: request, approval, hand-out, return with a note, all in the history", async ({ browser }) => {
-  const date = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
-
+test("a member borrows an analyser for the next antenna day: request, approval, hand-out, return with a note, all in the history", async ({ browser }) => {
   const member = await pageAs(browser, "member");
   await openItem(member, "AN-03");
   await expect(member.getByTestId("next-action")).toHaveAttribute("data-action", "request");
-  await member.getByLabel("From").fill(`${date}T09:00`);
-  await member.getByLabel("Until").fill(`${date}T18:00`);
+  // The next antenna day is the first one offered; its times replace the time fields.
+  const dayChoice = member.getByLabel("For an antenna day (optional)");
+  await dayChoice.selectOption({ index: 1 });
+  const dayTitle = (await dayChoice.locator("option:checked").innerText()).split(",")[0];
+  await expect(member.getByTestId("request-day-times")).toContainText("From the day's start to its end");
+  await expect(member.getByLabel("From")).toHaveCount(0);
   await member.getByLabel("What it is for (optional)").fill("Tuning the 20 m dipole");
   await member.getByRole("button", { name: "Request it" }).click();
   // The page now shows the request waiting for a steward.
@@ -39,12 +41,15 @@ test("a member borrows an analyser: request, approval, hand-out, return with a n
   const steward = await pageAs(browser, "steward");
   await steward.goto("/lending");
   const queue = steward.getByRole("list", { name: "Requests to approve" });
+  // The booking names the day it is for.
+  await expect(queue.getByTestId("booking-AN-03")).toContainText(`for ${dayTitle}`);
   await queue.getByTestId("booking-AN-03").getByRole("button", { name: /^Approve/ }).click();
   // Approved, it leaves the queue.
   await expect(queue.getByTestId("booking-AN-03")).toHaveCount(0);
 
   await openItem(steward, "AN-03");
   const booking = steward.getByTestId("item-booking").filter({ hasText: "Cleo Marchetti-Vane" });
+  await expect(booking).toContainText(`for ${dayTitle}`);
   await booking.getByRole("button", { name: /^Hand out/ }).click();
   await booking.getByLabel("Condition now").selectOption("good");
   await booking.getByRole("button", { name: "Record the hand-out" }).click();

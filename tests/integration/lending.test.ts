@@ -1,14 +1,16 @@
 // The lending desk against the real PostgreSQL: concurrency, roles, co-signs and the waitlist.
 // Source: Guyline issue 5 ("Gear shelf and lending desk"), its "Tests" section.
+import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db, pool } from "@/server/db";
 import { gearBookings } from "@/server/db/schema";
 import { PublicError, pgErrorCodes } from "@/server/errors";
 import { bookForStation, getBooking, itemHistory, itemWaitlist as itemWaitlistOf, joinWaitlist, listBookings, requestBooking, settleLapsedOffers, stepBooking, stepWaitlist } from "@/server/services/lending";
+import { createDay } from "@/server/services/antenna-days";
+import { createSite } from "@/server/services/sites";
 import { createSlot } from "@/server/services/station-slots";
 import { bookingListQuerySchema } from "@/validations/lending";
-import { dipoleSlot, newDay } from "./antenna-day-helpers";
 import { createPerson } from "./helpers";
 import { addAnalyser, addCoaxRun, clubTime, testSteward } from "./gear-helpers";
 
@@ -174,6 +176,27 @@ describe("the waitlist", () => {
   });
 });
 
+/** A real antenna day with one station slot: bookings name them through foreign keys. */
+async function dayWithSlot(): Promise<{ dayId: string; slotId: string }> {
+  const coordinator = await createPerson("coordinator");
+  const site = await createSite(coordinator, { name: `Loan field ${randomUUID()}`, widthM: 100, depthM: 100, groundClass: "average", groundConductivitySm: null, groundRelativePermittivity: null, notes: "", hazards: [] });
+  const day = await createDay(coordinator, { title: "Loan day", siteId: site.id, startsAtLocal: clubTime(10, 8), endsAtLocal: clubTime(10, 18), meetingPoint: "", description: "", safetyLeadId: coordinator.id });
+  const slot = await createSlot(coordinator, day.id, {
+    name: "Twenty",
+    bands: ["20m"],
+    powerW: 100,
+    mode: "ssb",
+    planParams: { family: "dipole", heightM: 10, wireDiameterMm: 2, feedlineType: "rg213" },
+    x: 50,
+    y: 50,
+    azimuthDeg: 0,
+    tentX: 50,
+    tentY: 30,
+    feedlineRunOverrideM: null,
+  });
+  return { dayId: day.id, slotId: slot.id };
+}
+
 describe("a whole loan", () => {
   it("goes from request to return, and a station booking is approved at once for a keeper", async () => {
     const item = await addCoaxRun();
@@ -187,10 +210,7 @@ describe("a whole loan", () => {
     const again = await publicErrorOf(stepBooking(member, booking.id, { action: "cancel" }));
     expect(again.code).toBe("conflict");
 
-    const coordinator = await createPerson("coordinator");
-    const day = await newDay(coordinator);
-    const slot = await createSlot(coordinator, day.id, dipoleSlot("Kit test", 50, 60));
-    const [dayId, slotId] = [day.id, slot.id];
+    const { dayId, slotId } = await dayWithSlot();
     const kit = await bookForStation(steward, { itemId: item.id, startsAt: clubTime(10, 8), endsAt: clubTime(10, 18), antennaDayId: dayId, stationSlotId: slotId });
     expect(kit.booking).toMatchObject({ state: "approved", antennaDayId: dayId, stationSlotId: slotId });
     expect((await publicErrorOf(bookForStation(member, { itemId: item.id, startsAt: clubTime(11, 8), endsAt: clubTime(11, 18), antennaDayId: dayId }))).status).toBe(403);

@@ -38,9 +38,11 @@ interface FieldsProps {
   units: Units;
   /** False on a station slot: band, ground, feedline length and transmitter come from the slot. */
   siteFields: boolean;
+  /** A coax run booked as the slot's feedline (its words): it sets the line, so its type is not chosen here. */
+  bookedFeedline?: string;
 }
 
-export function PlanFormFields({ form, region, units, siteFields }: FieldsProps) {
+export function PlanFormFields({ form, region, units, siteFields, bookedFeedline }: FieldsProps) {
   const { register, watch, formState } = form;
   const family = watch("family");
   const height = watch("heightM");
@@ -112,7 +114,13 @@ export function PlanFormFields({ form, region, units, siteFields }: FieldsProps)
       )}
       <TextField label="Wire diameter (mm)" type="number" inputMode="decimal" step="0.1" error={errors.wireDiameterMm?.message} {...register("wireDiameterMm", asNumber)} />
       <SelectField label="Wire" options={conductorOptions} error={errors.conductor?.message} {...register("conductor")} />
-      <SelectField label="Feedline type" options={feedlineOptions} error={errors.feedline?.type?.message} {...register("feedline.type")} />
+      {bookedFeedline ? (
+        <p className="mb-4 text-sm">
+          <span className="font-bold">Feedline type:</span> that of the booked coax run, {bookedFeedline}.
+        </p>
+      ) : (
+        <SelectField label="Feedline type" options={feedlineOptions} error={errors.feedline?.type?.message} {...register("feedline.type")} />
+      )}
       {siteFields && (
         <>
           <TextField label="Feedline length (m)" type="number" step="0.5" error={errors.feedline?.lengthM?.message} {...register("feedline.lengthM", asNumber)} />

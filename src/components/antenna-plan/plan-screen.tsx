@@ -16,6 +16,8 @@ import { groundClass } from "@/lib/antenna/ground-classes";
 import type { FamilyId, PlanRequestInput } from "@/lib/antenna/plan-schema";
 import { planRequestForSlot, slotPlanParamsOf, type SiteGround, type SlotMode, type SlotPlanParamsInput } from "@/lib/antenna-days/slot-plan";
 import type { Point } from "@/lib/site-plan/geometry";
+import type { FeedlineTypeId } from "@/lib/antenna/feedline-types";
+import { withFeedline } from "@/lib/station-kits/run-figures";
 import { formOfRequest, requestOfForm, type PlanFormValues } from "@/lib/plan-screen/form-values";
 import { formatDistance, type Units } from "@/lib/plan-screen/format";
 import type { ActionResult } from "@/server/action";
@@ -40,6 +42,8 @@ export interface SlotPlanContext {
   feedlineRunOverrideM: number | null;
   siteName: string;
   siteGround: SiteGround;
+  /** The coax run booked as the slot's feedline: the plan is computed with it instead of the slot's own run. */
+  feedline: { text: string; type: FeedlineTypeId; lengthM: number } | null;
   libraryPlanId: string | null;
   /** Coordinators may save the plan to the slot while the day is open; others try changes without saving. */
   canSave: boolean;
@@ -73,7 +77,8 @@ function groundLabel(ground: SiteGround): string {
 
 export function PlanScreen({ units, region, initialValues, slot, library, initialLibraryPlanId = null, saveToLibrary }: PlanScreenProps) {
   const router = useRouter();
-  const toRequest = useCallback(
+  // The plan as the slot stores it (with its own line type and run), and as computed: through the booked coax run if any.
+  const plannedRequest = useCallback(
     (values: PlanFormValues): PlanRequestInput => {
       const request = requestOfForm(values, region);
       if (!slot) return request;
@@ -84,6 +89,10 @@ export function PlanScreen({ units, region, initialValues, slot, library, initia
       );
     },
     [region, slot],
+  );
+  const toRequest = useCallback(
+    (values: PlanFormValues): PlanRequestInput => (slot?.feedline ? withFeedline(plannedRequest(values), slot.feedline) : plannedRequest(values)),
+    [plannedRequest, slot],
   );
   const form = useForm<PlanFormValues>({ defaultValues: initialValues, resolver: engineResolver(toRequest), mode: "onChange" });
   const values = useWatch({ control: form.control }) as PlanFormValues;
@@ -135,9 +144,14 @@ export function PlanScreen({ units, region, initialValues, slot, library, initia
               <dt className="font-bold">Feedline run</dt>
               <dd data-figure="feedline-run">
                 {formatDistance(request.feedline.lengthM, units)}
-                {slot.feedlineRunOverrideM === null ? " (tent distance + mast + slack)" : " (set by the coordinator)"}
+                {slot.feedline ? " (the booked coax run)" : slot.feedlineRunOverrideM === null ? " (tent distance + mast + slack)" : " (set by the coordinator)"}
               </dd>
             </dl>
+            {slot.feedline && (
+              <p className="mt-2 text-sm" data-figure="slot-feedline">
+                <span className="font-bold">feedline: {slot.feedline.text}</span>, booked for this slot on the station kits page.
+              </p>
+            )}
             <p className="mt-3 text-sm">
               <Link href={`/antenna-days/${slot.dayId}`}>Back to {slot.dayTitle}</Link>
             </p>
@@ -154,12 +168,12 @@ export function PlanScreen({ units, region, initialValues, slot, library, initia
           )}
           {libraryPlanId && <p className="mb-3 text-sm text-slate-700">From the plan library: {library.find((plan) => plan.id === libraryPlanId)?.name}.</p>}
           <form noValidate aria-label="Antenna plan" onSubmit={(event) => event.preventDefault()}>
-            <PlanFormFields form={form} region={region} units={units} siteFields={!slot} />
+            <PlanFormFields form={form} region={region} units={units} siteFields={!slot} bookedFeedline={slot?.feedline?.text} />
           </form>
           {fieldless.length > 0 && <ProblemList title="The slot's settings do not make a plan" problems={fieldless} />}
           {slot &&
             (slot.canSave ? (
-              <SaveToSlot slot={slot} values={values} toRequest={toRequest} libraryPlanId={libraryPlanId} disabled={problems.length > 0} form={form} onSaved={() => router.refresh()} />
+              <SaveToSlot slot={slot} values={values} plannedRequest={plannedRequest} libraryPlanId={libraryPlanId} disabled={problems.length > 0} form={form} onSaved={() => router.refresh()} />
             ) : (
               <p className="text-sm text-slate-700">{slot.readOnlyReason}</p>
             ))}
@@ -211,20 +225,20 @@ function ProblemList({ title, problems }: { title: string; problems: PlanProblem
 interface SaveToSlotProps {
   slot: SlotPlanContext;
   values: PlanFormValues;
-  toRequest: (values: PlanFormValues) => PlanRequestInput;
+  plannedRequest: (values: PlanFormValues) => PlanRequestInput;
   libraryPlanId: string | null;
   disabled: boolean;
   form: ReturnType<typeof useForm<PlanFormValues>>;
   onSaved: () => void;
 }
 
-function SaveToSlot({ slot, values, toRequest, libraryPlanId, disabled, form, onSaved }: SaveToSlotProps) {
+function SaveToSlot({ slot, values, plannedRequest, libraryPlanId, disabled, form, onSaved }: SaveToSlotProps) {
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   const [saving, setSaving] = useState(false);
   const save = async () => {
     setSaving(true);
     setMessage(null);
-    const result = await slot.saveToSlot({ slotId: slot.slotId, planParams: slotPlanParamsOf(toRequest(values)), libraryPlanId });
+    const result = await slot.saveToSlot({ slotId: slot.slotId, planParams: slotPlanParamsOf(plannedRequest(values)), libraryPlanId });
     setSaving(false);
     const unplaced: string[] = [];
     for (const [field, text] of Object.entries(result.fieldErrors ?? {})) {

@@ -39,6 +39,12 @@ export const demoItems: ItemSeed[] = [
   coax("CX-10", "RG-6 run, 40 m (75 Ω)", "rg6", 40, "f", "f", "Coax crate B"),
   coax("CX-11", "450 Ω window line, 20 m", "window450", 20, "bare", "bare", "Wire drawer"),
   coax("CX-12", "RG-213 run, 50 m", "rg213", 50, "n", "n"),
+  // Runs for the station kits of the demo's antenna days (feedline runs of about 19 to 32 m).
+  coax("CX-13", "RG-213 run, 35 m", "rg213", 35, "pl259"),
+  coax("CX-14", "RG-213 run, 40 m", "rg213", 40, "pl259", "n"),
+  coax("CX-15", "RG-8X run, 35 m", "rg8x", 35, "pl259"),
+  coax("CX-16", "RG-58 run, 32 m", "rg58", 32, "bnc", "pl259", "Coax crate B"),
+  coax("CX-17", "RG-213 run, 25 m", "rg213", 25, "pl259"),
   { labelCode: "MA-01", name: "Fibreglass push-up mast, 10 m", kind: "mast", location: "Mast rack", heightM: 10, guyKit: "2 levels × 3 guys, 6 stakes, guy plates" },
   { labelCode: "MA-02", name: "Fibreglass push-up mast, 12 m", kind: "mast", location: "Mast rack", heightM: 12, guyKit: "3 levels × 3 guys, 9 stakes" },
   { labelCode: "MA-03", name: "Aluminium sectional mast, 6 m", kind: "mast", location: "Mast rack", heightM: 6, guyKit: "1 level × 4 guys, 4 stakes", condition: "worn" },

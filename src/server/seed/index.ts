@@ -9,6 +9,7 @@ import { seedBuildSessions } from "./build-sessions";
 import { seedGear } from "./gear";
 import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
 import { seedPlanLibrary } from "./plans";
+import { seedStationKits } from "./station-kits";
 
 export async function seedDemo(): Promise<void> {
   const realAccounts = await db().execute<{ n: number }>(
@@ -25,5 +26,6 @@ export async function seedDemo(): Promise<void> {
     await seedPlanLibrary(tx, { ituRegion: settings!.ituRegion });
     await seedBuildSessions(tx);
     await seedGear(tx);
+    await seedStationKits(tx);
   });
 }

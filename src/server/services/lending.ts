@@ -57,6 +57,8 @@ export interface BookingDto {
   returnPhotoUrl: string | null;
   antennaDayId: string | null;
   stationSlotId: string | null;
+  /** A coax run booked as its station slot's feedline (the slot's plan uses it). */
+  slotFeedline: boolean;
   createdAt: string;
 }
 
@@ -128,6 +130,7 @@ function toBookingDto(row: BookingJoin, now = new Date()): BookingDto {
     returnPhotoUrl: booking.returnPhotoId ? itemFileUrl(booking.itemId, booking.returnPhotoId) : null,
     antennaDayId: booking.antennaDayId,
     stationSlotId: booking.stationSlotId,
+    slotFeedline: booking.slotFeedline,
     createdAt: booking.createdAt.toISOString(),
   };
 }
@@ -205,6 +208,8 @@ interface NewBooking {
   note?: string;
   antennaDayId?: string;
   stationSlotId?: string;
+  /** A coax run booked as the station slot's feedline (station kits). */
+  slotFeedline?: boolean;
   /** A keeper booking directly (station kits) approves at once, whatever the item's rule. */
   approvedBy?: Actor;
   recordedBy: Actor;
@@ -216,6 +221,7 @@ async function createBooking(tx: Transaction, input: NewBooking): Promise<{ book
   const { item, borrower, wanted, now } = input;
   if (item.retiredAt) throw conflict(`${item.labelCode} ${item.name} is retired and cannot be booked.`);
   if (input.stationSlotId && !input.antennaDayId) throw badInput("stationSlotId", "A station slot belongs to an antenna day; give the day too.");
+  if (input.slotFeedline && (item.kind !== "coax" || !input.stationSlotId)) throw badInput("itemId", "A slot's feedline is a coax run booked for a station slot.");
   const coSignRequired = !input.approvedBy && loanNeedsCoSign(borrower, item.kind);
   const held = await heldIntervals(tx, item.id, { forUserId: borrower.id, now });
   if (!isFree(held, wanted)) throw await timeTakenError(tx, item, wanted, { forUserId: borrower.id, now, timeZone: input.timeZone });
@@ -234,6 +240,7 @@ async function createBooking(tx: Transaction, input: NewBooking): Promise<{ book
       decidedAt: approveNow ? now : null,
       antennaDayId: input.antennaDayId ?? null,
       stationSlotId: input.stationSlotId ?? null,
+      slotFeedline: input.slotFeedline ?? false,
     })
     .returning();
   await recordHistory(tx, {
@@ -304,7 +311,7 @@ export async function requestBooking(actor: Actor, input: BookingRequestInput, n
  */
 export async function bookForStation(
   actor: Actor,
-  input: BookingRequestInput & { antennaDayId: string; borrowerId?: string },
+  input: BookingRequestInput & { antennaDayId: string; borrowerId?: string; slotFeedline?: boolean },
   now = new Date(),
 ): Promise<RequestResult> {
   if (!can(actor, "loans.manage")) throw forbidden();
@@ -733,6 +740,21 @@ export async function itemBookings(actor: Actor, itemId: string): Promise<Bookin
     .where(and(eq(gearBookings.itemId, itemId), or(inArray(gearBookings.state, ["out", "lost"]), and(inArray(gearBookings.state, ["requested", "approved"]), sql`${gearBookings.endsAt} > now()`))))
     .orderBy(asc(gearBookings.startsAt));
   return rows.map((row) => toBookingDto(row));
+}
+
+/** An antenna day's gear: the requests and loans tied to the day or its station slots that are still open. */
+export async function antennaDayBookings(actor: Actor, dayId: string): Promise<BookingDto[]> {
+  if (!can(actor, "loans.viewAll")) throw forbidden();
+  const rows = await selectBookings(db())
+    .where(and(eq(gearBookings.antennaDayId, dayId), inArray(gearBookings.state, ["requested", "approved", "out"])))
+    .orderBy(asc(gearItems.kind), asc(gearItems.labelCode));
+  return rows.map((row) => toBookingDto(row));
+}
+
+/** The items free for the whole time: nothing approved or out, and no one's open waitlist offer, holds any of it. */
+export async function freeItemIds(itemIds: readonly string[], wanted: Interval, now = new Date()): Promise<Set<string>> {
+  const free = await Promise.all(itemIds.map(async (id) => isFree(await heldIntervals(db(), id, { now }), wanted)));
+  return new Set(itemIds.filter((_, index) => free[index]));
 }
 
 export async function itemWaitlist(actor: Actor, itemId: string): Promise<WaitlistEntryDto[]> {

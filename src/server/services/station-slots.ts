@@ -2,7 +2,7 @@
 // plan and its feedline run. The plan is stored as the plan's own parameters and checked with
 // the engine's schema in the context of the slot and its site; a small summary of the computed
 // antenna (outline, exposure distance, fall zone) is kept on the slot for the site plan.
-import { asc, eq } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
 import { EngineInputError } from "@/lib/antenna/problems";
 import { planRequestSchema, type PlanRequest, type PlanRequestInput } from "@/lib/antenna/plan-schema";
@@ -10,10 +10,12 @@ import { antennaSummaryOf } from "@/lib/antenna-days/antenna-outline";
 import { feedlineRun, planRequestForSlot, slotFieldOfPlanPath, slotPlanParamsOf, type FeedlineRun, type SlotMode, type SlotPlanParams, type SlotPlanParamsInput } from "@/lib/antenna-days/slot-plan";
 import { isEditable } from "@/lib/antenna-days/status";
 import type { AntennaSummary } from "@/lib/site-plan/footprint";
+import type { BookedFeedline } from "@/lib/station-kits/booked-feedline";
+import { withFeedline } from "@/lib/station-kits/run-figures";
 import type { BandRange } from "@/lib/site-plan/checks";
 import { formatPath } from "@/server/api";
 import { db, type Executor } from "@/server/db";
-import { shifts, sites, stationSlots, type AntennaDayRow, type SiteRow, type StationSlotRow } from "@/server/db/schema";
+import { gearBookings, gearItems, shifts, sites, stationSlots, type AntennaDayRow, type SiteRow, type StationSlotRow } from "@/server/db/schema";
 import { runPlan } from "@/server/engine/run";
 import { badInput, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, type Actor } from "@/server/policy";
@@ -253,4 +255,48 @@ export async function getSlotWithContext(actor: Actor, slotId: string): Promise<
 /** Saves a plan into the slot (from the plan screen or the plan library) and refreshes its summary. */
 export async function saveSlotPlan(actor: Actor, slotId: string, planParams: SlotPlanParamsInput, libraryPlanId: string | null): Promise<SlotDto> {
   return updateSlot(actor, slotId, { planParams, libraryPlanId });
+}
+
+/**
+ * The coax runs booked as these slots' feedlines (station kits), by slot. A run approved or out
+ * comes first; after the day, a returned (or lost) run still names what the station used.
+ */
+export async function bookedFeedlines(slotIds: readonly string[], executor: Executor = db()): Promise<Map<string, BookedFeedline>> {
+  if (slotIds.length === 0) return new Map();
+  const rows = await executor
+    .select({
+      slotId: gearBookings.stationSlotId,
+      bookingId: gearBookings.id,
+      itemId: gearItems.id,
+      labelCode: gearItems.labelCode,
+      name: gearItems.name,
+      cableType: gearItems.cableType,
+      lengthM: gearItems.lengthM,
+    })
+    .from(gearBookings)
+    .innerJoin(gearItems, eq(gearItems.id, gearBookings.itemId))
+    .where(and(inArray(gearBookings.stationSlotId, [...slotIds]), eq(gearBookings.slotFeedline, true), inArray(gearBookings.state, ["approved", "out", "returned", "lost"])))
+    .orderBy(desc(sql`${gearBookings.state} in ('approved', 'out')`), desc(gearBookings.createdAt));
+  const feedlines = new Map<string, BookedFeedline>();
+  for (const { slotId, cableType, lengthM, ...run } of rows) {
+    // Coax runs always have a cable type and a length (gear_items_coax_details).
+    if (slotId && !feedlines.has(slotId)) feedlines.set(slotId, { ...run, cableType: cableType!, lengthM: lengthM! });
+  }
+  return feedlines;
+}
+
+export interface SlotFeedlineContext extends SlotContext {
+  /** The coax run booked as the slot's feedline, if any; `planRequest` is computed with it. */
+  feedline: BookedFeedline | null;
+}
+
+/**
+ * The slot's context with its effective feedline: the booked coax run (its cable type and
+ * length) if there is one, else the run the slot computes or the coordinator's override.
+ */
+export async function getSlotWithFeedline(actor: Actor, slotId: string): Promise<SlotFeedlineContext> {
+  const context = await getSlotWithContext(actor, slotId);
+  const feedline = (await bookedFeedlines([slotId])).get(slotId) ?? null;
+  const planRequest = feedline ? withFeedline(context.planRequest, { type: feedline.cableType, lengthM: feedline.lengthM }) : context.planRequest;
+  return { ...context, planRequest, feedline };
 }

@@ -4,8 +4,10 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { signedInAction } from "@/server/action";
 import { PublicError } from "@/server/errors";
-import { joinWaitlist, requestBooking, stepBooking, stepWaitlist } from "@/server/services/lending";
+import { joinWaitlist, requestBooking, stepBooking, stepWaitlist, type RequestResult } from "@/server/services/lending";
+import { requestForAntennaDay } from "@/server/services/station-kits";
 import { bookingRequestSchema, bookingStepSchema, waitlistJoinSchema, waitlistStepSchema } from "@/validations/lending";
+import { dayBookingRequestSchema } from "@/validations/station-kits";
 
 const outcomeMessages = {
   approved: "Booked: the item is yours for that time. Collect it from a steward.",
@@ -19,11 +21,11 @@ function revalidateLending(itemId: string) {
   revalidatePath("/");
 }
 
-/** A clash comes back with the next free time, so the form can offer it or the waitlist. */
-export const requestBookingAction = signedInAction(bookingRequestSchema, async (actor, input) => {
+/** A request; a clash comes back with the next free time, so the form can offer it or the waitlist. */
+async function request(itemId: string, ask: () => Promise<RequestResult>) {
   try {
-    const { outcome } = await requestBooking(actor, input);
-    revalidateLending(input.itemId);
+    const { outcome } = await ask();
+    revalidateLending(itemId);
     return { ok: true, message: outcomeMessages[outcome] };
   } catch (error) {
     if (error instanceof PublicError && error.code === "conflict" && error.details?.nextFreeStart) {
@@ -31,7 +33,12 @@ export const requestBookingAction = signedInAction(bookingRequestSchema, async (
     }
     throw error;
   }
-});
+}
+
+export const requestBookingAction = signedInAction(bookingRequestSchema, async (actor, input) => request(input.itemId, () => requestBooking(actor, input)));
+
+/** A request for an antenna day (and optionally a slot): the day gives the times. */
+export const requestForDayAction = signedInAction(dayBookingRequestSchema, async (actor, input) => request(input.itemId, () => requestForAntennaDay(actor, input)));
 
 export const bookingStepAction = signedInAction(z.object({ bookingId: z.uuid(), step: bookingStepSchema }), async (actor, { bookingId, step }) => {
   const { booking } = await stepBooking(actor, bookingId, step);

@@ -9,7 +9,10 @@ import { Card, PageHeader } from "@/components/ui/notice";
 import { formatInZone, formatRangeInZone } from "@/lib/time";
 import { can } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
+import { isEditable } from "@/lib/antenna-days/status";
+import { listDays } from "@/server/services/antenna-days";
 import { lendingDesk, listBorrowers, stepsFor, type BookingDto } from "@/server/services/lending";
+import { antennaDayLabels } from "@/server/services/station-kits";
 import { requirePageViewer } from "@/server/session";
 
 export const metadata: Metadata = { title: "Lending desk" };
@@ -19,6 +22,11 @@ export default async function LendingPage() {
   const [{ timeZone }, desk] = await Promise.all([getClubSettings(), lendingDesk(actor)]);
   const keeper = can(actor, "loans.manage");
   const borrowers = can(actor, "loans.viewAll") ? await listBorrowers(actor) : null;
+  const now = new Date();
+  const [dayLabels, kitDays] = await Promise.all([
+    antennaDayLabels([...desk.mine, ...desk.toApprove, ...desk.toHandOut, ...desk.out, ...desk.overdue, ...desk.toCoSign]),
+    keeper ? listDays(actor, { from: now }).then((days) => days.filter((day) => isEditable(day.status) && new Date(day.endsAt) > now)) : [],
+  ]);
 
   // `anchored`: each booking has an id to link to (/lending#booking-<id>, from e-mail and the calendar); one list only, ids are unique.
   const list = (bookings: BookingDto[], empty: string, label: string, anchored = false): ReactNode =>
@@ -34,6 +42,7 @@ export default async function LendingPage() {
                 {booking.itemLabelCode} {booking.itemName}
               </Link>{" "}
               · {booking.borrowerName} · {formatRangeInZone(booking.startsAt, booking.endsAt, timeZone)}
+              {dayLabels.has(booking.id) && <span> · for {dayLabels.get(booking.id)}</span>}
             </p>
             {booking.awaitingCoSign && <p className="text-sm text-slate-700">Waits for a mentor&apos;s co-sign before a steward can approve it.</p>}
             {booking.overdue && <p className="text-sm font-bold text-danger-600">Overdue since {formatInZone(booking.endsAt, timeZone)}.</p>}
@@ -75,6 +84,22 @@ export default async function LendingPage() {
           <Card title={`Requests to approve (${desk.toApprove.length})`}>{list(desk.toApprove, "No requests wait for approval.", "Requests to approve")}</Card>
           <Card title={`To hand out in the next day (${desk.toHandOut.length})`}>{list(desk.toHandOut, "Nothing to hand out soon.", "To hand out")}</Card>
           <Card title={`Out now (${desk.out.length})`}>{list(desk.out, "Nothing else is out.", "Out now")}</Card>
+          <Card title="Station kits">
+            {kitDays.length === 0 ? (
+              <p className="text-slate-600">No antenna day to come needs its kit booked.</p>
+            ) : (
+              <ul className="divide-y divide-slate-200" aria-label="Station kits of antenna days to come">
+                {kitDays.map((day) => (
+                  <li key={day.id} className="py-2">
+                    <Link href={`/antenna-days/${day.id}/kit`} className="font-bold">
+                      Station kits for {day.title}
+                    </Link>{" "}
+                    · {formatRangeInZone(day.startsAt, day.endsAt, timeZone)}
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Card>
         </>
       )}
       {desk.toCoSign.length > 0 && <Card title="Newcomers' requests to co-sign">{list(desk.toCoSign, "", "Requests to co-sign")}</Card>}

@@ -131,6 +131,8 @@ export const gearBookings = pgTable(
     stationSlotId: uuid("station_slot_id").references(() => stationSlots.id, { onDelete: "set null" }),
     /** Rises on every step of the booking (iCalendar SEQUENCE of its due date in calendar feeds). */
     sequence: integer("sequence").notNull().default(0),
+    /** A coax run booked as the slot's feedline: the slot's plan is computed with this run. */
+    slotFeedline: boolean("slot_feedline").notNull().default(false),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -141,6 +143,11 @@ export const gearBookings = pgTable(
     check("gear_bookings_ends_after_start", sql`${table.endsAt} > ${table.startsAt}`),
     check("gear_bookings_sequence", sql`${table.sequence} >= 0`),
     check("gear_bookings_slot_needs_day", sql`${table.stationSlotId} is null or ${table.antennaDayId} is not null`),
+    check("gear_bookings_feedline_needs_slot", sql`not ${table.slotFeedline} or ${table.stationSlotId} is not null`),
+    // One feedline per station slot at a time: two keepers booking two runs for one slot, one wins.
+    uniqueIndex("gear_bookings_one_feedline_per_slot")
+      .on(table.stationSlotId)
+      .where(sql`${table.slotFeedline} and ${table.state} in ('approved', 'out')`),
     check(
       "gear_bookings_co_sign_before_approval",
       sql`not ${table.coSignRequired} or ${table.coSignedBy} is not null or ${table.state} in ('requested', 'declined', 'cancelled')`,

@@ -9,6 +9,8 @@ import { Card, EmptyState, Notice, PageHeader } from "@/components/ui/notice";
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
 import { MODE_DUTY } from "@/lib/antenna/exposure";
 import { isEditable } from "@/lib/antenna-days/status";
+import type { Units } from "@/lib/plan-screen/format";
+import { bookedFeedlineText, type BookedFeedline } from "@/lib/station-kits/booked-feedline";
 import { formatRangeInZone } from "@/lib/time";
 import { loadOrNotFound } from "@/server/page-data";
 import { can } from "@/server/policy";
@@ -16,14 +18,14 @@ import { getClubSettings } from "@/server/services/accounts";
 import { getDay } from "@/server/services/antenna-days";
 import { listShiftsOfDay } from "@/server/services/shifts";
 import { getSite } from "@/server/services/sites";
-import { listSlots, type SlotDto } from "@/server/services/station-slots";
+import { bookedFeedlines, listSlots, type SlotDto } from "@/server/services/station-slots";
 import { requirePageViewer } from "@/server/session";
 
 export const metadata: Metadata = { title: "Antenna day" };
 
 const m = (value: number) => `${value.toFixed(1)} m`;
 
-function SlotFacts({ slot }: { slot: SlotDto }) {
+function SlotFacts({ slot, feedline, units }: { slot: SlotDto; feedline: BookedFeedline | undefined; units: Units }) {
   const run = slot.feedlineRun;
   const facts: [string, string][] = [
     ["Bands", slot.bands.join(", ")],
@@ -40,6 +42,7 @@ function SlotFacts({ slot }: { slot: SlotDto }) {
         ? `${m(run.lengthM)} (set by the coordinator; computed ${m(run.computedM)})`
         : `${m(run.lengthM)} = ${m(run.groundM)} to the tent + ${m(run.mastM)} up the mast + ${m(run.slackM)} slack`,
     ],
+    ...(feedline ? [["Feedline booked", `${bookedFeedlineText(feedline, units)} (the plan uses it)`] as [string, string]] : []),
   ];
   return (
     <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2">
@@ -54,11 +57,12 @@ function SlotFacts({ slot }: { slot: SlotDto }) {
 }
 
 export default async function AntennaDayPage({ params }: { params: Promise<{ dayId: string }> }) {
-  const { actor } = await requirePageViewer("antennaDays.view");
+  const { actor, member } = await requirePageViewer("antennaDays.view");
   const { dayId } = await params;
   const day = await loadOrNotFound(dayId, (id) => getDay(actor, id));
   const [slots, shiftsBySlot, site, settings] = await Promise.all([listSlots(actor, day.id), listShiftsOfDay(actor, day.id), getSite(actor, day.site.id), getClubSettings()]);
   const region = settings.ituRegion as ItuRegion;
+  const feedlines = await bookedFeedlines(slots.map((slot) => slot.id));
   const manage = can(actor, "antennaDays.manage") && isEditable(day.status);
   const planSlots: PlanSlot[] = slots.map((slot) => ({
     id: slot.id,
@@ -144,7 +148,14 @@ export default async function AntennaDayPage({ params }: { params: Promise<{ day
       <section aria-labelledby="slots-heading">
         <div className="mb-3 flex flex-wrap items-center justify-between gap-2">
           <h2 id="slots-heading">Station slots</h2>
-          {manage && <ButtonLink href={`/antenna-days/${day.id}/slots/new`}>Add a station slot</ButtonLink>}
+          <div className="flex flex-wrap gap-2">
+            {can(actor, "loans.manage") && slots.length > 0 && (
+              <ButtonLink href={`/antenna-days/${day.id}/kit`} variant="secondary">
+                Station kits
+              </ButtonLink>
+            )}
+            {manage && <ButtonLink href={`/antenna-days/${day.id}/slots/new`}>Add a station slot</ButtonLink>}
+          </div>
         </div>
         {slots.length === 0 && <EmptyState title="No station slots yet." />}
         {slots.map((slot) => (
@@ -165,7 +176,7 @@ export default async function AntennaDayPage({ params }: { params: Promise<{ day
                 )}
               </div>
             </div>
-            <SlotFacts slot={slot} />
+            <SlotFacts slot={slot} feedline={feedlines.get(slot.id)} units={member.units} />
             <h4 className="mt-4 mb-1 font-bold">Shifts</h4>
             <ShiftList slotName={slot.name} shifts={shiftsBySlot[slot.id] ?? []} manage={manage} />
             {manage && <AddShiftForm slotId={slot.id} slotName={slot.name} defaults={{ startsAtLocal: day.startsAtLocal, endsAtLocal: day.endsAtLocal }} />}

@@ -20,6 +20,7 @@ import { can, canCoSignLoan, loanNeedsCoSign } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
 import { getItem, listItemFiles } from "@/server/services/gear";
 import { itemBookings, itemHistory, itemWaitlist, settleLapsedOffers, stepsFor, type BookingDto } from "@/server/services/lending";
+import { antennaDayLabels, upcomingDayChoices } from "@/server/services/station-kits";
 import { requirePageViewer } from "@/server/session";
 
 export const metadata: Metadata = { title: "Gear item" };
@@ -59,6 +60,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
     now,
   );
   const nextBooking = "bookingId" in next ? bookings.find((booking) => booking.id === next.bookingId) : undefined;
+  const [dayChoices, dayLabels] = await Promise.all([next.kind === "request" ? upcomingDayChoices(actor, now) : [], antennaDayLabels(bookings)]);
   const tomorrow = instantToDate(new Date(now.getTime() + 86_400_000), timeZone);
   const shelfCondition: ShelfCondition | undefined = item.condition === "retired" ? undefined : item.condition;
   const photos = files.filter((file) => file.purpose === "photo");
@@ -68,6 +70,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
     <>
       <StateBadge state={booking.state} overdue={booking.overdue} /> <span className="font-bold">{booking.borrowerName}</span> ·{" "}
       {formatRangeInZone(booking.startsAt, booking.endsAt, timeZone)}
+      {dayLabels.has(booking.id) && <span> · for {dayLabels.get(booking.id)}</span>}
       {booking.awaitingCoSign && <span className="text-sm text-slate-700"> · waits for a mentor&apos;s co-sign</span>}
     </>
   );
@@ -91,7 +94,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
       <Card title={nextActionHeadings[next.kind]}>
         <div data-testid="next-action" data-action={next.kind}>
           {next.kind === "request" && (
-            <RequestForm itemId={item.id} timeZone={timeZone} defaultStart={`${tomorrow}T09:00`} defaultEnd={`${tomorrow}T17:00`} needsCoSign={next.needsCoSign} />
+            <RequestForm itemId={item.id} timeZone={timeZone} defaultStart={`${tomorrow}T09:00`} defaultEnd={`${tomorrow}T17:00`} needsCoSign={next.needsCoSign} days={dayChoices} />
           )}
           {next.kind === "none" && <p>{next.reason}</p>}
           {nextBooking && (

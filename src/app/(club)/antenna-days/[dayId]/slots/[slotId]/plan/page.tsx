@@ -4,10 +4,11 @@ import { PlanScreen } from "@/components/antenna-plan/plan-screen";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/notice";
 import { formOfRequest } from "@/lib/plan-screen/form-values";
+import { bookedFeedlineText } from "@/lib/station-kits/booked-feedline";
 import { can } from "@/server/policy";
 import { loadOrNotFound } from "@/server/page-data";
 import { listLibraryPlans } from "@/server/services/plans";
-import { getSlotWithContext } from "@/server/services/station-slots";
+import { getSlotWithFeedline } from "@/server/services/station-slots";
 import { requirePageViewer } from "@/server/session";
 import { saveToLibraryAction } from "@/app/(club)/bench/actions";
 import { saveSlotPlanAction } from "./actions";
@@ -17,7 +18,7 @@ export const metadata: Metadata = { title: "Station plan" };
 export default async function SlotPlanPage({ params }: { params: Promise<{ dayId: string; slotId: string }> }) {
   const { actor, member } = await requirePageViewer("plans.view");
   const { dayId, slotId } = await params;
-  const { slot, day, site, region, planRequest, canEdit } = await loadOrNotFound(slotId, (id) => getSlotWithContext(actor, id));
+  const { slot, day, site, region, planRequest, canEdit, feedline } = await loadOrNotFound(slotId, (id) => getSlotWithFeedline(actor, id));
   if (slot.dayId !== dayId) notFound();
   const library = await listLibraryPlans(actor);
   return (
@@ -30,7 +31,8 @@ export default async function SlotPlanPage({ params }: { params: Promise<{ dayId
       <PlanScreen
         units={member.units}
         region={region}
-        initialValues={formOfRequest(planRequest)}
+        // The form holds the plan's own line; a booked coax run replaces it only when computing.
+        initialValues={formOfRequest({ ...planRequest, feedline: { type: slot.planParams.feedlineType, lengthM: slot.feedlineRun.lengthM } })}
         initialLibraryPlanId={slot.libraryPlanId}
         library={library.map(({ id, name, family, parameters }) => ({ id, name, family, parameters }))}
         slot={{
@@ -46,6 +48,7 @@ export default async function SlotPlanPage({ params }: { params: Promise<{ dayId
           feedlineRunOverrideM: slot.feedlineRunOverrideM,
           siteName: site.name,
           siteGround: { groundClass: site.groundClass, groundConductivitySm: site.groundConductivitySm, groundRelativePermittivity: site.groundRelativePermittivity },
+          feedline: feedline && { text: bookedFeedlineText(feedline, member.units), type: feedline.cableType, lengthM: feedline.lengthM },
           libraryPlanId: slot.libraryPlanId,
           canSave: canEdit,
           readOnlyReason: can(actor, "antennaDays.manage")

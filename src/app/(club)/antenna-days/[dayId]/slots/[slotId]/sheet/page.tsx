@@ -12,10 +12,11 @@ import { EngineInputError } from "@/lib/antenna/problems";
 import { bandEdgePoints } from "@/lib/plan-screen/band-edges";
 import { CLOSING_CAUTION, SAFETY_CAUTIONS } from "@/lib/plan-screen/cautions";
 import { formatDistance, formatImpedance, formatMHz, formatSwr, type Units } from "@/lib/plan-screen/format";
+import { bookedFeedlineText } from "@/lib/station-kits/booked-feedline";
 import { formatInZone, formatRangeInZone } from "@/lib/time";
 import { runPlan } from "@/server/engine/run";
 import { loadOrNotFound } from "@/server/page-data";
-import { getSlotWithContext } from "@/server/services/station-slots";
+import { getSlotWithFeedline } from "@/server/services/station-slots";
 import { requirePageViewer } from "@/server/session";
 import { PrintButton } from "./print-button";
 import "./station-sheet.css";
@@ -128,7 +129,7 @@ function SafetyBlock({ result, fallZoneM, guyRadiusM, exposureM, units }: { resu
 export default async function StationSheetPage({ params }: { params: Promise<{ dayId: string; slotId: string }> }) {
   const { actor, member } = await requirePageViewer("plans.view");
   const { dayId, slotId } = await params;
-  const { slot, day, site, planRequest, shifts } = await loadOrNotFound(slotId, (id) => getSlotWithContext(actor, id));
+  const { slot, day, site, planRequest, shifts, feedline } = await loadOrNotFound(slotId, (id) => getSlotWithFeedline(actor, id));
   if (slot.dayId !== dayId) notFound();
   const computed = await planOrProblems(planRequest);
   const result = "result" in computed ? computed.result : null;
@@ -200,6 +201,11 @@ export default async function StationSheetPage({ params }: { params: Promise<{ d
 
           <section className="mb-4" aria-labelledby="sheet-feed">
             <h2 id="sheet-feed">Feedline and {result.transformer.kind}</h2>
+            {feedline && (
+              <p className="font-bold" data-figure="slot-feedline">
+                feedline: {bookedFeedlineText(feedline, units)}
+              </p>
+            )}
             <p>
               {formatDistance(result.feedline.lengthM, units)} of {result.feedline.label} ({result.feedline.z0Ohms} Ω) through a {result.transformer.label}; loss at
               the centre {result.bands.map((band) => `${band.band.name} ${band.loss.matchedDb.toFixed(1)} dB matched, ${band.loss.totalDb.toFixed(1)} dB in all`).join("; ")}.

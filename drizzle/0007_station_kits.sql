@@ -1,0 +1,3 @@
+ALTER TABLE "gear_bookings" ADD COLUMN "slot_feedline" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+CREATE UNIQUE INDEX "gear_bookings_one_feedline_per_slot" ON "gear_bookings" USING btree ("station_slot_id") WHERE "gear_bookings"."slot_feedline" and "gear_bookings"."state" in ('approved', 'out');--> statement-breakpoint
+ALTER TABLE "gear_bookings" ADD CONSTRAINT "gear_bookings_feedline_needs_slot" CHECK (not "gear_bookings"."slot_feedline" or "gear_bookings"."station_slot_id" is not null);
