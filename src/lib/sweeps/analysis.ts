@@ -2,11 +2,12 @@
 // zero, or the SWR dip), its shift from the predicted one, the measured 2:1 bandwidth at the
 // radio, whether the whole band fits under 2:1, and what to ask the engine's trim for.
 import type { PlanResult, SwrBandwidth } from "@/lib/antenna/plan";
-import { swrBandwidth, swrMinimum, zeroCrossing } from "@/lib/antenna/plan";
+import { planModel, swrBandwidth, swrMinimum, zeroCrossing } from "@/lib/antenna/plan";
 import type { Tuning } from "@/lib/antenna/resonance";
 import type { TrimRequestInput, TrimResult } from "@/lib/antenna/trim";
 import type { PlanRequest } from "@/lib/antenna/plan-schema";
-import type { FeedChainRef, SweepViews, ViewPoint } from "./feed-point";
+import { chainOf, sweepViews, type FeedChainRef, type SweepPlace, type SweepViews, type ViewPoint } from "./feed-point";
+import type { MeasuredPoint } from "./parse";
 
 /** A band's part of a sweep: within ±15 % of its centre, so the bands of a fan dipole (20, 15, 10 m) never share points. */
 export const BAND_WINDOW = 0.15;
@@ -192,4 +193,28 @@ export function measuredOffsets(bands: BandComparison[], trim: TrimOutcome, buil
     if (modelMHz) return [{ band: band.band, offsetPercent: (band.trimMHz / modelMHz - 1) * 100 }];
     return builtToPlan && band.shiftPercent !== null ? [{ band: band.band, offsetPercent: band.shiftPercent }] : [];
   });
+}
+
+export interface Comparison {
+  chain: FeedChainRef;
+  views: SweepViews;
+  bands: BandComparison[];
+}
+
+/** The sweep through the plan's balun or unun and feedline, compared band by band with the plan. */
+export function compareSweep(points: MeasuredPoint[], place: SweepPlace, plan: PlanResult): Comparison {
+  const chain: FeedChainRef = { transformerId: plan.transformer.id, feedlineType: plan.feedline.id, lengthM: plan.feedline.lengthM };
+  const views = sweepViews(points, place, chainOf(chain));
+  return { chain, views, bands: compareWithPlan(views, plan, planModel(plan.request).tuning.kind) };
+}
+
+/** The analysis kept with a sweep, once the engine's trim has answered (or could not). */
+export function analysisOf(comparison: Comparison, trim: TrimOutcome, builtToPlan: boolean): SweepAnalysis {
+  return {
+    chain: comparison.chain,
+    bands: comparison.bands,
+    trim,
+    offsets: measuredOffsets(comparison.bands, trim, builtToPlan),
+    explanation: comparison.views.explanation,
+  };
 }

@@ -10,12 +10,12 @@
 import { and, asc, desc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { timeInputToInstant } from "@/lib/lending/time-input";
 import type { ItuRegion } from "@/lib/antenna/bands";
-import { planModel, type PlanResult } from "@/lib/antenna/plan";
+import type { PlanResult } from "@/lib/antenna/plan";
 import { planRequestSchema, type PlanRequest } from "@/lib/antenna/plan-schema";
 import { EngineInputError } from "@/lib/antenna/problems";
 import { planRequestForSlot } from "@/lib/antenna-days/slot-plan";
-import { compareWithPlan, measuredOffsets, trimRequestOf, type SweepAnalysis, type TrimOutcome } from "@/lib/sweeps/analysis";
-import { chainOf, sweepViews, type FeedChainRef, type SweepPlace, type SweepViews } from "@/lib/sweeps/feed-point";
+import { analysisOf, compareSweep, trimRequestOf, type BandComparison, type SweepAnalysis, type TrimOutcome } from "@/lib/sweeps/analysis";
+import { chainOf, sweepViews, type SweepPlace, type SweepViews } from "@/lib/sweeps/feed-point";
 import { meanOffsets, nextCut, type BandOffset, type NextCut } from "@/lib/sweeps/next-cut";
 import { problemText, readSweepFile, type MeasuredPoint, type SweepColumn, type SweepMapping, type SweepQuantity } from "@/lib/sweeps/parse";
 import type { Problem } from "@/server/api";
@@ -315,8 +315,8 @@ export type UploadOutcome = { ok: true; sweep: SweepDetailDto } | { ok: false; p
 const mhz = (value: number) => `${Number(value.toFixed(3))} MHz`;
 
 /** The engine's trim for the comparison, or why there is none. */
-async function trimFor(request: PlanRequest, plan: PlanResult, analysis: Pick<SweepAnalysis, "bands">, built: number[] | null, builtFrom: "plan" | "uploader"): Promise<TrimOutcome> {
-  const trimRequest = trimRequestOf(request, plan, analysis.bands, built);
+async function trimFor(plan: PlanResult, bands: BandComparison[], built: number[] | null, builtFrom: "plan" | "uploader"): Promise<TrimOutcome> {
+  const trimRequest = trimRequestOf(plan.request, plan, bands, built);
   if (!trimRequest.ok) return { ok: false, reason: trimRequest.reason };
   try {
     const result = await runTrim(trimRequest.input);
@@ -353,10 +353,8 @@ export async function uploadSweep(actor: Actor, target: SweepTarget, upload: { f
   if (measuredAt.getTime() > Date.now() + 5 * 60_000) throw badInput("measuredAt", "A sweep cannot be measured in the future.");
 
   const plan = await runPlan(context.planRequest);
-  const chain: FeedChainRef = { transformerId: plan.transformer.id, feedlineType: plan.feedline.id, lengthM: plan.feedline.lengthM };
-  const views = sweepViews(points, fields.place, chainOf(chain));
-  const bands = compareWithPlan(views, plan, planModel(plan.request).tuning.kind);
-  if (bands.length === 0) {
+  const comparison = compareSweep(points, fields.place, plan);
+  if (comparison.bands.length === 0) {
     const bandList = plan.bands.map((band) => `${band.band.name}, ${mhz(band.band.lowMHz)} to ${mhz(band.band.highMHz)}`).join("; ");
     throw badInput("file", `The sweep runs ${mhz(range[0])} to ${mhz(range[1])} and reaches none of this antenna's bands (${bandList}). Check the frequency unit.`);
   }
@@ -367,8 +365,8 @@ export async function uploadSweep(actor: Actor, target: SweepTarget, upload: { f
   }
   const builtFrom = given?.some((length) => length !== null) ? "uploader" : "plan";
   const built = builtFrom === "uploader" ? plan.elements.map((element, k) => given![k] ?? element.lengthM) : null;
-  const trim = await trimFor(plan.request, plan, { bands }, built, builtFrom);
-  const analysis: SweepAnalysis = { chain, bands, trim, offsets: measuredOffsets(bands, trim, builtFrom === "plan"), explanation: views.explanation };
+  const trim = await trimFor(plan, comparison.bands, built, builtFrom);
+  const analysis = analysisOf(comparison, trim, builtFrom === "plan");
 
   const id = await db().transaction(async (tx) => {
     const file = await storeFile(tx, uploadRules.sweep, { bytes: upload.bytes, fileName: upload.fileName, uploadedBy: actor.id });
