@@ -9,8 +9,10 @@
 // returned). Newcomers cannot upload. Any confirmed member and up may upload to a library plan.
 import { and, asc, desc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { timeInputToInstant } from "@/lib/lending/time-input";
+import { instantToWallTime } from "@/lib/time";
 import type { ItuRegion } from "@/lib/antenna/bands";
-import type { PlanResult } from "@/lib/antenna/plan";
+import { TRANSFORMERS, feedlineType } from "@/lib/antenna/feedline";
+import { planModel, significant, type PlanResult } from "@/lib/antenna/plan";
 import { planRequestSchema, type PlanRequest } from "@/lib/antenna/plan-schema";
 import { EngineInputError } from "@/lib/antenna/problems";
 import { planRequestForSlot } from "@/lib/antenna-days/slot-plan";
@@ -461,4 +463,49 @@ export async function planOffsets(actor: Actor, planId: string): Promise<PlanOff
   if (means.length === 0) return { entries, means, nextCut: null };
   const result = await runPlan(plan.parameters);
   return { entries, means, nextCut: nextCut(result.request, result.elements.map((element) => ({ band: element.band, lengthM: element.lengthM })), means) };
+}
+
+export interface SweepPageData {
+  sweeps: SweepSummaryDto[];
+  access: SweepAccess;
+  /** The sweep to show: the one asked for, or the newest. */
+  selected: SweepDetailDto | null;
+  /** The target's plan changed since the selected sweep was compared with it. */
+  planChanged: boolean;
+  analysers: AnalyserChoice[];
+  /** One label per element of the plan (its band). */
+  elements: string[];
+  /** The balun or unun and the feedline run, in words. */
+  feedline: string;
+  /** Now in club time, for the form's default. */
+  nowLocal: string;
+}
+
+/** Equal as JSON values, whatever the order of their keys (jsonb keeps its own order). */
+function sameValue(a: unknown, b: unknown): boolean {
+  if (typeof a !== "object" || typeof b !== "object" || a === null || b === null) return a === b;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
+  return [...keys].every((key) => sameValue((a as Record<string, unknown>)[key], (b as Record<string, unknown>)[key]));
+}
+
+/** Everything a page with a sweeps section needs, in one call. */
+export async function sweepPageData(actor: Actor, target: SweepTarget, selectedId?: string): Promise<SweepPageData> {
+  const context = await targetContext(actor, target);
+  const [sweeps, access, analysers, { timeZone }] = await Promise.all([listSweeps(actor, target), accessFor(actor, context), listAnalysers(), getClubSettings()]);
+  const chosen = sweeps.find((sweep) => sweep.id === selectedId) ?? sweeps[0];
+  const selected = chosen ? await getSweep(actor, chosen.id) : null;
+  const request = context.planRequest;
+  const model = planModel(request);
+  const transformer = TRANSFORMERS[model.transformer];
+  return {
+    sweeps,
+    access,
+    selected,
+    planChanged: selected !== null && !sameValue(selected.planRequest, significant(request)),
+    analysers,
+    elements: model.elements.map((element) => element.band.name),
+    feedline: `${request.feedline.lengthM.toFixed(1)} m of ${feedlineType(request.feedline.type).label} from the ${transformer.label}`,
+    nowLocal: instantToWallTime(new Date(), timeZone).slice(0, 16),
+  };
 }
