@@ -70,10 +70,20 @@ export function loanNeedsCoSign(borrower: Pick<Actor, "role">, itemKind: string)
   return borrower.role === "newcomer" && itemKind === "analyser";
 }
 
-/** Coordinators may upload to any slot; members only to slots of days they take part in. */
+/**
+ * Coordinators may upload to any slot; members only to slots of days they take part in
+ * (signed up for a shift of the day, its safety lead, or holding gear booked for it: the
+ * sweeps service decides, see takesPartInDay).
+ */
 export function canUploadSweep(actor: Actor | null, takesPartInDay: boolean): boolean {
   if (!can(actor, "sweeps.upload")) return false;
   return actor!.role === "coordinator" || takesPartInDay;
+}
+
+/** A sweep is deleted by the person who uploaded it, or a coordinator. */
+export function canDeleteSweep(actor: Actor | null, uploadedBy: string | null): boolean {
+  if (!can(actor, "sweeps.upload")) return false;
+  return actor!.role === "coordinator" || actor!.id === uploadedBy;
 }
 
 /** A person may cancel their own booking, loan request or sign-up; keepers may cancel anyone's. */

@@ -9,7 +9,7 @@ import type { PlanBand, PlanResult } from "@/lib/antenna/plan";
 import { bandEdgePoints } from "@/lib/plan-screen/band-edges";
 import { CLOSING_CAUTION, PLAN_SCREEN_CAUTIONS } from "@/lib/plan-screen/cautions";
 import { formatCutLength, formatDistance, formatImpedance, formatMHz, formatSwr, type Units } from "@/lib/plan-screen/format";
-import { CurrentChart, ImpedanceChart, SwrChart } from "./charts";
+import { CurrentChart, ImpedanceChart, SwrChart, type MeasuredOverlay } from "./charts";
 import { CutSheetTable } from "./cut-sheet-table";
 import { tableClass } from "./table-class";
 
@@ -30,7 +30,7 @@ function bandwidthText(width: PlanBand["swrBandwidth"]["radio"]): string {
   return `${atLeast}${Math.round(width.widthKHz)} kHz (${width.lowMHz.toFixed(3)}–${width.highMHz.toFixed(3)} MHz)`;
 }
 
-function BandResults({ band, result, units }: { band: PlanBand; result: PlanResult; units: Units }) {
+function BandResults({ band, result, units, measured }: { band: PlanBand; result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
   const edges = bandEdgePoints(band);
   const dangerous = band.endVoltages.points.filter((point) => point.dangerousToTouch);
   return (
@@ -65,8 +65,8 @@ function BandResults({ band, result, units }: { band: PlanBand; result: PlanResu
         </Figure>
       </dl>
 
-      <SwrChart band={band} transformerLabel={result.transformer.label} />
-      <ImpedanceChart band={band} />
+      <SwrChart band={band} transformerLabel={result.transformer.label} measured={measured} />
+      <ImpedanceChart band={band} measured={measured} />
       <CurrentChart band={band} currents={band.currents} units={units} />
 
       <h4 className="mb-2 font-bold">RF voltage at the wire ends at {band.endVoltages.powerW} W</h4>
@@ -131,7 +131,7 @@ function BandResults({ band, result, units }: { band: PlanBand; result: PlanResu
   );
 }
 
-export function PlanResults({ result, units }: { result: PlanResult; units: Units }) {
+export function PlanResults({ result, units, measured }: { result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
   const cautions = [...new Set([...PLAN_SCREEN_CAUTIONS, ...result.cautions])].filter((caution) => caution !== CLOSING_CAUTION);
   return (
     <div>
@@ -182,7 +182,7 @@ export function PlanResults({ result, units }: { result: PlanResult; units: Unit
       </dl>
 
       {result.bands.map((band) => (
-        <BandResults key={band.band.name} band={band} result={result} units={units} />
+        <BandResults key={band.band.name} band={band} result={result} units={units} measured={measured} />
       ))}
 
       <section aria-labelledby="plan-cautions" className="mb-6">

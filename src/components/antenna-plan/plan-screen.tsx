@@ -21,6 +21,7 @@ import { withFeedline } from "@/lib/station-kits/run-figures";
 import { formOfRequest, requestOfForm, type PlanFormValues } from "@/lib/plan-screen/form-values";
 import { formatDistance, type Units } from "@/lib/plan-screen/format";
 import type { ActionResult } from "@/server/action";
+import type { MeasuredOverlay } from "./charts";
 import { engineResolver, requestProblems, type PlanProblem } from "./engine-resolver";
 import { PlanFormFields } from "./plan-form-fields";
 import { PlanResults } from "./plan-results";
@@ -68,6 +69,8 @@ interface PlanScreenProps {
   /** The library plan the starting values came from, if any. */
   initialLibraryPlanId?: string | null;
   saveToLibrary?: (input: { name: string; notes: string; parameters: PlanRequestInput }) => Promise<ActionResult<{ id: string }>>;
+  /** A measured sweep to draw over the predicted curves. */
+  measured?: MeasuredOverlay;
 }
 
 function groundLabel(ground: SiteGround): string {
@@ -75,7 +78,7 @@ function groundLabel(ground: SiteGround): string {
   return groundClass(ground.groundClass).label;
 }
 
-export function PlanScreen({ units, region, initialValues, slot, library, initialLibraryPlanId = null, saveToLibrary }: PlanScreenProps) {
+export function PlanScreen({ units, region, initialValues, slot, library, initialLibraryPlanId = null, saveToLibrary, measured }: PlanScreenProps) {
   const router = useRouter();
   // The plan as the slot stores it (with its own line type and run), and as computed: through the booked coax run if any.
   const plannedRequest = useCallback(
@@ -193,7 +196,7 @@ export function PlanScreen({ units, region, initialValues, slot, library, initia
         {engine.problems.length > 0 && <ProblemList title="The engine cannot plan this antenna" problems={engine.problems.map(splitProblem)} />}
         {engine.result ? (
           <div className={problems.length > 0 || engine.problems.length > 0 ? "opacity-60" : ""}>
-            <PlanResults result={engine.result} units={units} />
+            <PlanResults result={engine.result} units={units} measured={measured} />
           </div>
         ) : (
           problems.length === 0 && <p className="text-slate-700">Computing the plan…</p>

@@ -1,9 +1,9 @@
-// What a file really is, from its first bytes, not its name or the type the browser claims.
+// What a file really is, from its bytes, not its name or the type the browser claims.
 // Only the few formats Guyline accepts are recognised; everything else is refused.
 // The signatures are those of the WHATWG MIME Sniffing Standard (image type pattern matching
-// and the PDF signature).
+// and the PDF signature); text is told from binary by the same standard's binary data bytes.
 
-export const acceptedTypes = ["image/jpeg", "image/png", "image/webp", "application/pdf"] as const;
+export const acceptedTypes = ["image/jpeg", "image/png", "image/webp", "application/pdf", "text/plain"] as const;
 export type AcceptedType = (typeof acceptedTypes)[number];
 
 interface Signature {
@@ -21,7 +21,7 @@ const signatures: Signature[] = [
   { type: "application/pdf", pattern: ascii("%PDF-") },
 ];
 
-/** The accepted type the bytes begin with, or null. */
+/** The accepted binary type the bytes begin with, or null (text has no signature: see isPlainText). */
 export function sniffType(bytes: Uint8Array): AcceptedType | null {
   const match = signatures.find(
     ({ pattern }) => bytes.length >= pattern.length && pattern.every((byte, index) => byte === null || bytes[index] === byte),
@@ -29,11 +29,21 @@ export function sniffType(bytes: Uint8Array): AcceptedType | null {
   return match?.type ?? null;
 }
 
-export const fileExtensions: Record<AcceptedType, string> = {
-  "image/jpeg": "jpg",
-  "image/png": "png",
-  "image/webp": "webp",
-  "application/pdf": "pdf",
+/**
+ * Text holds no binary data byte (0x00–0x08, 0x0B, 0x0E–0x1A, 0x1C–0x1F: WHATWG MIME Sniffing
+ * Standard, "binary data byte"), checked over the whole file rather than its first bytes.
+ */
+export function isPlainText(bytes: Uint8Array): boolean {
+  return bytes.length > 0 && bytes.every((byte) => !(byte <= 0x08 || byte === 0x0b || (byte >= 0x0e && byte <= 0x1a) || (byte >= 0x1c && byte <= 0x1f)));
+}
+
+/** File name extensions kept for each type; the first is given to a file whose own is not listed. */
+export const fileExtensions: Record<AcceptedType, readonly string[]> = {
+  "image/jpeg": ["jpg"],
+  "image/png": ["png"],
+  "image/webp": ["webp"],
+  "application/pdf": ["pdf"],
+  "text/plain": ["txt", "csv", "tsv", "dat", "prn"],
 };
 
 export const isImage = (type: string) => type.startsWith("image/");

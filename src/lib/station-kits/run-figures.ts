@@ -26,7 +26,7 @@ export interface RunFigures {
 }
 
 /** The slot's plan request fed through another run of line (a coax run from the shelf). */
-export function withFeedline(request: PlanRequestInput, run: { type: FeedlineTypeId; lengthM: number }): PlanRequestInput {
+export function withFeedline<Request extends PlanRequestInput>(request: Request, run: { type: FeedlineTypeId; lengthM: number }): Request {
   return { ...request, feedline: { type: run.type, lengthM: run.lengthM } };
 }
 

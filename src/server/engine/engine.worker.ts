@@ -5,9 +5,10 @@ import { parentPort } from "node:worker_threads";
 import { evaluate } from "@/lib/antenna/evaluate";
 import { plan } from "@/lib/antenna/plan";
 import { EngineInputError } from "@/lib/antenna/problems";
+import { trim } from "@/lib/antenna/trim";
 import type { EngineCall, EngineReply } from "./protocol";
 
-const calls = { plan, evaluate } satisfies Record<EngineCall, (request: unknown) => unknown>;
+const calls = { plan, evaluate, trim } satisfies Record<EngineCall, (request: unknown) => unknown>;
 
 parentPort!.on("message", ({ id, call, request }: { id: number; call: EngineCall; request: unknown }) => {
   let reply: EngineReply;

@@ -1,5 +1,5 @@
 // The messages between run.ts and engine.worker.ts.
-export type EngineCall = "plan" | "evaluate";
+export type EngineCall = "plan" | "evaluate" | "trim";
 
 export type EngineReply =
   | { id: number; ok: true; result: unknown }

@@ -1,4 +1,4 @@
-// The antenna engine on the server, off the event loop: `runPlan` and `runEvaluate` send the
+// The antenna engine on the server, off the event loop: `runPlan`, `runEvaluate` and `runTrim` send the
 // request to a pool of worker threads, so a sweep of a few hundred milliseconds never stalls
 // other requests, and several requests run side by side on several cores.
 //
@@ -17,6 +17,7 @@ import { Worker } from "node:worker_threads";
 import type { EvaluateResponse } from "@/lib/antenna/evaluate";
 import type { PlanResult } from "@/lib/antenna/plan";
 import { EngineInputError } from "@/lib/antenna/problems";
+import type { TrimResult } from "@/lib/antenna/trim";
 import type { Problem } from "@/server/api";
 import { PublicError } from "@/server/errors";
 import { PoolBusyError, PoolTimeLimitError, WorkerPool } from "./pool";
@@ -71,6 +72,11 @@ export function runPlan(request: unknown): Promise<PlanResult> {
 /** The contract's evaluate call; bad input rejects with EngineInputError. */
 export function runEvaluate(request: unknown): Promise<EvaluateResponse> {
   return runInWorker("evaluate", request) as Promise<EvaluateResponse>;
+}
+
+/** Trim advice from a measured resonance (re-solves the geometry); bad input rejects with EngineInputError. */
+export function runTrim(request: unknown): Promise<TrimResult> {
+  return runInWorker("trim", request) as Promise<TrimResult>;
 }
 
 /** The engine's `path: message` lines as the HTTP API's problems. */

@@ -1,4 +1,4 @@
-// The demo: an invented club with its people, sites, antenna days, gear and build sessions.
+// The demo: an invented club with its people, sites, antenna days, gear, build sessions and measured sweeps.
 // Idempotent: each area seeds only what is not there yet. It refuses to touch a database
 // that holds real (non-demo) accounts.
 import { sql } from "drizzle-orm";
@@ -10,6 +10,7 @@ import { seedGear } from "./gear";
 import { demoEmailDomain, demoPassword, seedClubAndPeople } from "./people";
 import { seedPlanLibrary } from "./plans";
 import { seedStationKits } from "./station-kits";
+import { seedSweeps } from "./sweeps";
 
 export async function seedDemo(): Promise<void> {
   const realAccounts = await db().execute<{ n: number }>(
@@ -27,5 +28,6 @@ export async function seedDemo(): Promise<void> {
     await seedBuildSessions(tx);
     await seedGear(tx);
     await seedStationKits(tx);
+    await seedSweeps(tx, { timeZone: settings!.timeZone, ituRegion: settings!.ituRegion });
   });
 }

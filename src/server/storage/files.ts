@@ -7,7 +7,8 @@ import { eq } from "drizzle-orm";
 import { type Executor, pool } from "@/server/db";
 import { storedFileBytes, storedFiles, type StoredFileRow } from "@/server/db/schema";
 import { badInput } from "@/server/errors";
-import { fileExtensions, isImage, sniffType, type AcceptedType } from "@/lib/files/sniff";
+import { SWEEP_LIMITS } from "@/lib/sweeps/parse";
+import { fileExtensions, isImage, isPlainText, sniffType, type AcceptedType } from "@/lib/files/sniff";
 
 export interface UploadRule {
   /** What the upload is called in messages, e.g. "A photo". */
@@ -20,6 +21,7 @@ const MB = 1024 * 1024;
 export const uploadRules = {
   photo: { label: "A photo", types: ["image/jpeg", "image/png", "image/webp"], maxBytes: 8 * MB },
   manual: { label: "A manual", types: ["application/pdf"], maxBytes: 20 * MB },
+  sweep: { label: "A sweep file", types: ["text/plain"], maxBytes: SWEEP_LIMITS.maxBytes },
 } as const satisfies Record<string, UploadRule>;
 
 /** The largest body any upload route reads, so an oversized request is refused before it is read. */
@@ -30,6 +32,7 @@ const typeNames: Record<AcceptedType, string> = {
   "image/png": "PNG",
   "image/webp": "WebP",
   "application/pdf": "PDF",
+  "text/plain": "text (CSV or whitespace-separated)",
 };
 
 export function describeTypes(types: readonly AcceptedType[]): string {
@@ -65,7 +68,7 @@ export async function storeFile(
   if (bytes.length > rule.maxBytes) {
     throw badInput("file", `${rule.label} may be at most ${rule.maxBytes / MB} MB; this file is ${(bytes.length / MB).toFixed(1)} MB.`);
   }
-  const type = sniffType(bytes);
+  const type = sniffType(bytes) ?? (isPlainText(bytes) ? "text/plain" : null);
   if (!type || !rule.types.includes(type)) {
     throw badInput("file", `${rule.label} must be a ${describeTypes(rule.types)} file; this file's contents are not.`);
   }
@@ -83,14 +86,17 @@ export async function storeFile(
   return row;
 }
 
-/** A safe file name for the download header: no paths or control characters, the sniffed extension. */
+/** A safe file name for the download header: no paths or control characters, an extension of the sniffed type. */
 export function cleanFileName(name: string, type: AcceptedType): string {
-  const base = (name.split(/[\\/]/).pop() ?? "")
+  const last = name.split(/[\\/]/).pop() ?? "";
+  const own = /\.([^.]*)$/.exec(last)?.[1].toLowerCase() ?? "";
+  const extension = fileExtensions[type].includes(own) ? own : fileExtensions[type][0];
+  const base = last
     .replace(/\.[^.]*$/, "")
     .replace(/[^\p{L}\p{N} ._-]/gu, "")
     .trim()
     .slice(0, 80);
-  return `${base || "file"}.${fileExtensions[type]}`;
+  return `${base || "file"}.${extension}`;
 }
 
 export async function findStoredFile(executor: Executor, id: string): Promise<StoredFileRow | undefined> {

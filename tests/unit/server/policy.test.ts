@@ -3,7 +3,7 @@
 // Source: Guyline product brief (shared/design/product.md), "Roles".
 import { describe, expect, it } from "vitest";
 import { roles, type Role } from "@/lib/roles";
-import { can, canCoSignLoan, canEditLibraryPlan, canReturnLoan, canSeeBooking, canUploadSweep, loanNeedsCoSign, permissions, type Actor, type Permission } from "@/server/policy";
+import { can, canCoSignLoan, canDeleteSweep, canEditLibraryPlan, canReturnLoan, canSeeBooking, canUploadSweep, loanNeedsCoSign, permissions, type Actor, type Permission } from "@/server/policy";
 
 const C = "coordinator", S = "steward", M = "member", N = "newcomer";
 
@@ -110,5 +110,18 @@ describe("policy: the plan library", () => {
     expect(canEditLibraryPlan(actor(N), "id-newcomer")).toBe(false);
     expect(canEditLibraryPlan(actor(M, { confirmed: false }), "id-member")).toBe(false);
     expect(canEditLibraryPlan(null, "id-member")).toBe(false);
+  });
+});
+
+describe("policy: measured sweeps", () => {
+  it("lets the person who uploaded a sweep, or a coordinator, delete it", () => {
+    expect(canDeleteSweep(actor(M), "id-member")).toBe(true);
+    expect(canDeleteSweep(actor(M), "someone-else")).toBe(false);
+    expect(canDeleteSweep(actor(S), "someone-else")).toBe(false);
+    expect(canDeleteSweep(actor(C), "someone-else")).toBe(true);
+    expect(canDeleteSweep(actor(C), null)).toBe(true);
+    expect(canDeleteSweep(actor(N), "id-newcomer")).toBe(false);
+    expect(canDeleteSweep(actor(M, { confirmed: false }), "id-member")).toBe(false);
+    expect(canDeleteSweep(null, "id-member")).toBe(false);
   });
 });

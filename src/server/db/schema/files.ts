@@ -1,4 +1,4 @@
-// Uploaded files (photos, manuals), kept in PostgreSQL so that a database backup keeps them and
+// Uploaded files (photos, manuals, sweep files), kept in PostgreSQL so that a database backup keeps them and
 // every app instance sees them. The bytes sit in their own table, so listing and joining file
 // metadata never drags the contents along. See "Stored files" in DEVELOPERS.md.
 import { sql } from "drizzle-orm";
@@ -25,7 +25,7 @@ export const storedFiles = pgTable(
   },
   (table) => [
     check("stored_files_byte_size_positive", sql`${table.byteSize} > 0`),
-    check("stored_files_content_type", sql`${table.contentType} in ('image/jpeg', 'image/png', 'image/webp', 'application/pdf')`),
+    check("stored_files_content_type", sql`${table.contentType} in ('image/jpeg', 'image/png', 'image/webp', 'application/pdf', 'text/plain')`),
     check("stored_files_sha256_hex", sql`${table.sha256} ~ '^[0-9a-f]{64}$'`),
   ],
 );

@@ -7,3 +7,4 @@ export * from "./mail";
 export * from "./build-sessions";
 export * from "./files";
 export * from "./gear";
+export * from "./sweeps";

@@ -1,10 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PlanParameters } from "@/components/antenna-plan/plan-parameters";
+import { PlanOffsetsCard } from "@/components/sweeps/plan-offsets";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState, PageHeader } from "@/components/ui/notice";
 import { loadOrNotFound } from "@/server/page-data";
+import { getClubSettings } from "@/server/services/accounts";
 import { getLibraryPlan } from "@/server/services/plans";
+import { planOffsets } from "@/server/services/sweeps";
 import { requirePageViewer } from "@/server/session";
 import { LibraryPlanEditor } from "./library-plan-editor";
 
@@ -14,6 +17,7 @@ export default async function LibraryPlanPage({ params }: { params: Promise<{ pl
   const { actor, member } = await requirePageViewer("plans.view");
   const { planId } = await params;
   const plan = await loadOrNotFound(planId, (id) => getLibraryPlan(actor, id));
+  const [offsets, { timeZone }] = await Promise.all([planOffsets(actor, plan.id), getClubSettings()]);
   return (
     <>
       <PageHeader title={plan.name}>
@@ -37,36 +41,41 @@ export default async function LibraryPlanPage({ params }: { params: Promise<{ pl
             </Card>
           )}
         </div>
-        <Card title="Where it is used">
-          {plan.usage.length === 0 && plan.buildSessions.length === 0 ? (
-            <EmptyState title="Nothing uses this plan yet">
-              A coordinator can start a slot&apos;s plan from it on the slot&apos;s plan page, or choose it for a build session.
-            </EmptyState>
-          ) : (
-            <>
-              {plan.usage.length > 0 && (
-                <ul className="mb-4 space-y-2" aria-label="Station slots using this plan">
-                  {plan.usage.map((use) => (
-                    <li key={use.slotId}>
-                      <Link href={`/antenna-days/${use.dayId}/slots/${use.slotId}/plan`}>{use.slotName}</Link> on{" "}
-                      <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({use.dayStartsAt.slice(0, 10)}, {use.dayStatus})
-                    </li>
-                  ))}
-                </ul>
-              )}
-              {plan.buildSessions.length > 0 && (
-                <ul className="space-y-2" aria-label="Build sessions using this plan">
-                  {plan.buildSessions.map((session) => (
-                    <li key={session.sessionId}>
-                      Build session <Link href={`/build-sessions/${session.sessionId}`}>{session.title}</Link> ({session.startsAt.slice(0, 10)}
-                      {session.status === "cancelled" ? ", cancelled" : ""})
-                    </li>
-                  ))}
-                </ul>
-              )}
-            </>
-          )}
-        </Card>
+        <div>
+          <Card title="Where it is used">
+            {plan.usage.length === 0 && plan.buildSessions.length === 0 ? (
+              <EmptyState title="Nothing uses this plan yet">
+                A coordinator can start a slot&apos;s plan from it on the slot&apos;s plan page, or choose it for a build session.
+              </EmptyState>
+            ) : (
+              <>
+                {plan.usage.length > 0 && (
+                  <ul className="mb-4 space-y-2" aria-label="Station slots using this plan">
+                    {plan.usage.map((use) => (
+                      <li key={use.slotId}>
+                        <Link href={`/antenna-days/${use.dayId}/slots/${use.slotId}/plan`}>{use.slotName}</Link> on{" "}
+                        <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({use.dayStartsAt.slice(0, 10)}, {use.dayStatus})
+                      </li>
+                    ))}
+                  </ul>
+                )}
+                {plan.buildSessions.length > 0 && (
+                  <ul className="space-y-2" aria-label="Build sessions using this plan">
+                    {plan.buildSessions.map((session) => (
+                      <li key={session.sessionId}>
+                        Build session <Link href={`/build-sessions/${session.sessionId}`}>{session.title}</Link> ({session.startsAt.slice(0, 10)}
+                        {session.status === "cancelled" ? ", cancelled" : ""})
+                      </li>
+                    ))}
+                  </ul>
+                )}
+              </>
+            )}
+          </Card>
+          <Card title="What the sweeps say">
+            <PlanOffsetsCard offsets={offsets} planId={plan.id} units={member.units} timeZone={timeZone} />
+          </Card>
+        </div>
       </div>
     </>
   );

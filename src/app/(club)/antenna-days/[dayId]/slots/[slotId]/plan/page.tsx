@@ -1,26 +1,30 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PlanScreen } from "@/components/antenna-plan/plan-screen";
+import { SweepsSection } from "@/components/sweeps/sweeps-section";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader } from "@/components/ui/notice";
 import { formOfRequest } from "@/lib/plan-screen/form-values";
 import { bookedFeedlineText } from "@/lib/station-kits/booked-feedline";
+import { formatInZone } from "@/lib/time";
 import { can } from "@/server/policy";
 import { loadOrNotFound } from "@/server/page-data";
 import { listLibraryPlans } from "@/server/services/plans";
 import { getSlotWithFeedline } from "@/server/services/station-slots";
+import { sweepPageData } from "@/server/services/sweeps";
 import { requirePageViewer } from "@/server/session";
 import { saveToLibraryAction } from "@/app/(club)/bench/actions";
 import { saveSlotPlanAction } from "./actions";
 
 export const metadata: Metadata = { title: "Station plan" };
 
-export default async function SlotPlanPage({ params }: { params: Promise<{ dayId: string; slotId: string }> }) {
+export default async function SlotPlanPage({ params, searchParams }: { params: Promise<{ dayId: string; slotId: string }>; searchParams: Promise<{ sweep?: string }> }) {
   const { actor, member } = await requirePageViewer("plans.view");
-  const { dayId, slotId } = await params;
+  const [{ dayId, slotId }, { sweep: sweepId }] = await Promise.all([params, searchParams]);
   const { slot, day, site, region, planRequest, canEdit, feedline } = await loadOrNotFound(slotId, (id) => getSlotWithFeedline(actor, id));
   if (slot.dayId !== dayId) notFound();
-  const library = await listLibraryPlans(actor);
+  const [library, sweeps] = await Promise.all([listLibraryPlans(actor), sweepPageData(actor, { kind: "slot", id: slot.id }, sweepId)]);
+  const pagePath = `/antenna-days/${day.id}/slots/${slot.id}/plan`;
   return (
     <>
       <PageHeader title={`${slot.name}: antenna plan`}>
@@ -28,7 +32,17 @@ export default async function SlotPlanPage({ params }: { params: Promise<{ dayId
           Station sheet
         </ButtonLink>
       </PageHeader>
+      <SweepsSection
+        sweeps={sweeps.sweeps}
+        selected={sweeps.selected}
+        planChanged={sweeps.planChanged}
+        access={sweeps.access}
+        timeZone={day.timeZone}
+        units={member.units}
+        upload={{ uploadUrl: `/api/slots/${slot.id}/sweeps`, pagePath, analysers: sweeps.analysers, elements: sweeps.elements, feedline: sweeps.feedline, nowLocal: sweeps.nowLocal }}
+      />
       <PlanScreen
+        measured={sweeps.selected ? { label: `the sweep of ${formatInZone(sweeps.selected.measuredAt, day.timeZone)}`, views: sweeps.selected.views } : undefined}
         units={member.units}
         region={region}
         // The form holds the plan's own line; a booked coax run replaces it only when computing.
