@@ -14,16 +14,7 @@ import {
   verifyCredentials,
 } from "@/server/services/accounts";
 import { joinSchema } from "@/validations/accounts";
-import { createPerson, reloadPerson, testPassword, uniqueEmail } from "./helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
+import { createPerson, publicErrorOf, reloadPerson, testPassword, uniqueEmail } from "./helpers";
 
 describe("joining with the club's join code", () => {
   it("creates an unconfirmed newcomer who can then sign in", async () => {

@@ -10,16 +10,7 @@ import { copyDay, deleteDay, getDay, listDays, updateDay } from "@/server/servic
 import { cancelSignUp, createShift, listShifts, signUp, updateShift } from "@/server/services/shifts";
 import { createSlot, getSlotWithContext, listSlots, saveSlotPlan, updateSlot } from "@/server/services/station-slots";
 import { dipoleSlot, newDay } from "./antenna-day-helpers";
-import { createPerson } from "./helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
+import { createPerson, publicErrorOf } from "./helpers";
 
 async function publishedDayWithShift(capacity: number, times = { startsAtLocal: "2031-06-14T09:00", endsAtLocal: "2031-06-14T13:00" }) {
   const coordinator = await createPerson("coordinator");

@@ -5,22 +5,12 @@ import { eq, inArray } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/server/db";
 import { gearItems } from "@/server/db/schema";
-import { PublicError } from "@/server/errors";
 import { addItemFile, findItemFile, importItems, listItems, retireItem, updateItem } from "@/server/services/gear";
 import { itemHistory, requestBooking, stepBooking } from "@/server/services/lending";
 import { fileResponse, uploadRules } from "@/server/storage/files";
 import { gearItemSchema, gearListQuerySchema } from "@/validations/gear";
-import { createPerson } from "./helpers";
+import { createPerson, publicErrorOf } from "./helpers";
 import { addAnalyser, addCoaxRun, clubTime, testSteward, uniqueLabel } from "./gear-helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
 
 // Source: W3C PNG Specification (Third Edition), §5.2 PNG signature; a 1×1 PNG's first bytes.
 const pngBytes = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, 0, 0, 0, 1, 0, 0, 0, 1, 8, 6, 0, 0, 0]);

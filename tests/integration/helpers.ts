@@ -1,8 +1,10 @@
 // Each test makes its own data: people get unique e-mail addresses, so tests never collide.
 import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
+import { expect } from "vitest";
 import { Temporal } from "temporal-polyfill";
 import { db } from "@/server/db";
+import { PublicError } from "@/server/errors";
 import { users } from "@/server/db/schema";
 import type { Role } from "@/lib/roles";
 import type { Actor } from "@/server/policy";
@@ -66,4 +68,14 @@ export async function scheduleSession(options: { capacity: number; inDays?: numb
   });
   const { id } = await createBuildSession(coordinator, input);
   return { id, coordinator, mentor, input };
+}
+
+/** The PublicError a service call is expected to throw (fails the test when it resolves). */
+export async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
+  const error = await promise.then(
+    () => null,
+    (thrown: unknown) => thrown,
+  );
+  expect(error).toBeInstanceOf(PublicError);
+  return error as PublicError;
 }

@@ -11,17 +11,8 @@ import { createDay } from "@/server/services/antenna-days";
 import { createSite } from "@/server/services/sites";
 import { createSlot } from "@/server/services/station-slots";
 import { bookingListQuerySchema } from "@/validations/lending";
-import { createPerson } from "./helpers";
+import { createPerson, publicErrorOf } from "./helpers";
 import { addAnalyser, addCoaxRun, clubTime, testSteward } from "./gear-helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
 
 describe("no double-booking", () => {
   it("gives exactly one of 20 concurrent requests for the same time, and the others the next free time", async () => {

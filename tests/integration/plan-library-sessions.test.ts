@@ -3,21 +3,11 @@
 // refused by name.
 import { randomUUID } from "node:crypto";
 import { describe, expect, it } from "vitest";
-import { PublicError } from "@/server/errors";
 import { createBuildSession, getBuildSession, updateBuildSession } from "@/server/services/build-sessions";
 import { deleteLibraryPlan, getLibraryPlan, listLibraryPlans, saveLibraryPlan } from "@/server/services/plans";
 import { buildSessionSchema } from "@/validations/build-sessions";
 import { libraryPlanSchema } from "@/validations/plans";
-import { createPerson, testPlan, wallTimeInDays } from "./helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
+import { createPerson, publicErrorOf, testPlan, wallTimeInDays } from "./helpers";
 
 async function sessionFrom(libraryPlanId: string | null) {
   const coordinator = await createPerson("coordinator");

@@ -9,11 +9,11 @@ import type { SlotPlanParams } from "@/lib/antenna-days/slot-plan";
 import type { AntennaSummary } from "@/lib/site-plan/footprint";
 import { db } from "@/server/db";
 import { antennaDays, antennaPlans, sites, stationSlots } from "@/server/db/schema";
-import { PublicError, pgErrorCode, pgErrorCodes } from "@/server/errors";
+import { pgErrorCode, pgErrorCodes } from "@/server/errors";
 import type { Actor } from "@/server/policy";
 import { deleteLibraryPlan, getLibraryPlan, listLibraryPlans, saveLibraryPlan, updateLibraryPlan } from "@/server/services/plans";
 import { libraryPlanPatchSchema, libraryPlanSchema } from "@/validations/plans";
-import { createPerson } from "./helpers";
+import { createPerson, publicErrorOf } from "./helpers";
 
 const dipole: PlanRequestInput = {
   family: "dipole",
@@ -30,15 +30,6 @@ const uniqueName = (label: string) => `${label} ${randomUUID().slice(0, 8)}`;
 
 async function save(actor: Actor, name = uniqueName("Plan"), parameters: PlanRequestInput = dipole) {
   return saveLibraryPlan(actor, libraryPlanSchema.parse({ name, parameters }));
-}
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
 }
 
 /** A station slot on a new day pointing at the plan (rows written directly: the slot service is Days' to test). */

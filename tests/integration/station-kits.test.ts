@@ -17,17 +17,8 @@ import { requestBooking, stepBooking } from "@/server/services/lending";
 import { createSite } from "@/server/services/sites";
 import { antennaDayLabels, bookKit, dayKit, requestForAntennaDay, slotKit, upcomingDayChoices } from "@/server/services/station-kits";
 import { createSlot, getSlotWithFeedline } from "@/server/services/station-slots";
-import { createPerson } from "./helpers";
+import { createPerson, publicErrorOf } from "./helpers";
 import { addAnalyser, addCoaxRun, testSteward } from "./gear-helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
 
 let dayCounter = 0;
 

@@ -6,7 +6,6 @@ import { describe, expect, it } from "vitest";
 import { plan } from "@/lib/antenna/plan";
 import { db } from "@/server/db";
 import { measuredSweeps, storedFiles } from "@/server/db/schema";
-import { PublicError } from "@/server/errors";
 import type { Actor } from "@/server/policy";
 import { createDay, updateDay } from "@/server/services/antenna-days";
 import { bookForStation } from "@/server/services/lending";
@@ -17,16 +16,7 @@ import { createSlot, deleteSlot, getSlotWithContext, saveSlotPlan } from "@/serv
 import { deleteSweep, getSweep, listSweeps, planOffsets, sweepFile, uploadSweep, type SweepTarget } from "@/server/services/sweeps";
 import { sweepUploadFieldsSchema } from "@/validations/sweeps";
 import { addAnalyser } from "./gear-helpers";
-import { createPerson } from "./helpers";
-
-async function publicErrorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(
-    () => null,
-    (thrown: unknown) => thrown,
-  );
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
+import { createPerson, publicErrorOf } from "./helpers";
 
 /** A published day in 2031 with one 20 m dipole slot and a shift. */
 async function dayWithSlot() {
