@@ -1,25 +1,14 @@
 // Prints what running the antenna engine in a worker thread costs: the median time of a
 // dipole plan computed inline against the same plan through runPlan (worker pool), the first
-// call with the worker's start-up, and several plans at once. Run: npm run bench:plan-route
+// call with the worker's start-up, and several plans at once, for the 20 m dipole the tests use.
+// Run: npm run bench:plan-route
 import { availableParallelism } from "node:os";
 import { plan } from "@/lib/antenna/plan";
-import type { PlanRequestInput } from "@/lib/antenna/plan-schema";
 import { runPlan } from "@/server/engine/run";
+import { DIPOLE_20M as dipolePlan } from "../tests/fixtures/plan-requests";
 
 const ROUNDS = 40;
 const CONCURRENT = 8;
-
-/** A 20 m dipole 10 m over average ground on 20 m of RG-213: the plan screen's default. */
-const dipolePlan: PlanRequestInput = {
-  family: "dipole",
-  band: "20m",
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
-};
 
 const median = (values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);

@@ -3,6 +3,7 @@
 // Source: Guyline antenna engine contract (shared/design/engine-contract.md), "Errors".
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { signInApi } from "./fixtures";
+import { DIPOLE_20M as dipolePlan } from "../fixtures/plan-requests";
 
 const dipole = {
   wires: [{ from: [0, -5, 10], to: [0, 5, 10], diameterMm: 2, segments: 21 }],
@@ -10,17 +11,6 @@ const dipole = {
   ground: { kind: "free" },
   frequenciesMHz: [14.0, 14.2, 14.4],
   referenceOhms: 50,
-};
-
-const dipolePlan = {
-  family: "dipole",
-  band: "20m",
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
 };
 
 const realGround = { kind: "real", conductivitySm: 0.005, relativePermittivity: 13 };

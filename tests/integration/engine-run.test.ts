@@ -7,16 +7,15 @@ import { plan } from "@/lib/antenna/plan";
 import type { PlanRequestInput } from "@/lib/antenna/plan-schema";
 import { EngineInputError } from "@/lib/antenna/problems";
 import { runEvaluate, runPlan } from "@/server/engine/run";
-
-const site = { region: 1, heightM: 10, wireDiameterMm: 2, ground: "average", feedline: { type: "rg213", lengthM: 20 }, transmitter: { powerW: 100, mode: "ssb" } } as const;
+import { TEST_SITE } from "../fixtures/plan-requests";
 
 const requests: PlanRequestInput[] = [
-  { ...site, family: "dipole", band: "20m" },
-  { ...site, family: "inverted-v", band: "17m", includedAngleDeg: 110 },
-  { ...site, family: "vertical", band: "15m", heightM: 5, radials: 4 },
-  { ...site, family: "end-fed", band: "20m", unun: "49:1" },
-  { ...site, family: "off-centre-fed", band: "20m" },
-  { ...site, family: "fan-dipole", bands: ["20m", "15m"] },
+  { ...TEST_SITE, family: "dipole", band: "20m" },
+  { ...TEST_SITE, family: "inverted-v", band: "17m", includedAngleDeg: 110 },
+  { ...TEST_SITE, family: "vertical", band: "15m", heightM: 5, radials: 4 },
+  { ...TEST_SITE, family: "end-fed", band: "20m", unun: "49:1" },
+  { ...TEST_SITE, family: "off-centre-fed", band: "20m" },
+  { ...TEST_SITE, family: "fan-dipole", bands: ["20m", "15m"] },
 ];
 
 async function problemsOf(promise: Promise<unknown>): Promise<string[]> {
@@ -38,7 +37,7 @@ describe("runPlan and runEvaluate in worker threads", () => {
   }, 120_000);
 
   it("finds the resonant length of a thin dipole in free space through the worker", async () => {
-    const answer = await runPlan({ ...site, family: "dipole", band: "20m", ground: "free-space", conductor: "perfect" });
+    const answer = await runPlan({ ...TEST_SITE, family: "dipole", band: "20m", ground: "free-space", conductor: "perfect" });
     const halfWave = 299.792458 / answer.elements[0].centreMHz / 2;
     // Source: reference-data.md §2, resonant length against length-to-diameter ratio (thin-wire
     // Galerkin method of moments, computed): K = 0.971 at l/d = 5000, R about 72 Ω at resonance;
@@ -52,16 +51,16 @@ describe("runPlan and runEvaluate in worker threads", () => {
   it("returns the engine's problems for bad input, naming the field, while good calls beside it succeed", async () => {
     const [good, bad, alsoGood] = await Promise.allSettled([
       runPlan(requests[0]),
-      runPlan({ ...site, family: "dipole", band: "20m", heightM: -2, wireDiameterMm: 0 }),
+      runPlan({ ...TEST_SITE, family: "dipole", band: "20m", heightM: -2, wireDiameterMm: 0 }),
       runPlan(requests[1]),
     ]);
     expect(good.status).toBe("fulfilled");
     expect(alsoGood.status).toBe("fulfilled");
     expect(bad.status).toBe("rejected");
-    expect(await problemsOf(runPlan({ ...site, family: "dipole", band: "20m", heightM: -2, wireDiameterMm: 0 }))).toEqual(
+    expect(await problemsOf(runPlan({ ...TEST_SITE, family: "dipole", band: "20m", heightM: -2, wireDiameterMm: 0 }))).toEqual(
       expect.arrayContaining([expect.stringMatching(/^heightM: /), expect.stringMatching(/^wireDiameterMm: /)]),
     );
-    expect(await problemsOf(runPlan({ ...site, family: "rhombic", band: "20m" }))).toEqual([expect.stringMatching(/^family: must be one of/)]);
+    expect(await problemsOf(runPlan({ ...TEST_SITE, family: "rhombic", band: "20m" }))).toEqual([expect.stringMatching(/^family: must be one of/)]);
   });
 
   it("evaluates several structures at once, as the engine does inline, and refuses a bad wire by its path", async () => {

@@ -14,17 +14,7 @@ import type { Actor } from "@/server/policy";
 import { deleteLibraryPlan, getLibraryPlan, listLibraryPlans, saveLibraryPlan, updateLibraryPlan } from "@/server/services/plans";
 import { libraryPlanPatchSchema, libraryPlanSchema } from "@/validations/plans";
 import { createPerson, publicErrorOf } from "./helpers";
-
-const dipole: PlanRequestInput = {
-  family: "dipole",
-  band: "20m",
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
-};
+import { DIPOLE_20M as dipole } from "../fixtures/plan-requests";
 
 const uniqueName = (label: string) => `${label} ${randomUUID().slice(0, 8)}`;
 

@@ -4,15 +4,7 @@ import { EPS0, SPEED_OF_LIGHT, wavelengthMetres } from "@/lib/antenna/physics";
 import { plan } from "@/lib/antenna/plan";
 import { prepareStructure, solveAt } from "@/lib/antenna/solver";
 import type { Structure } from "@/lib/antenna/structure";
-
-const SITE = {
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
-} as const;
+import { TEST_SITE } from "../../fixtures/plan-requests";
 
 /** A resonant-length thin dipole in free space, fed between two legs. */
 function freeDipole(mhz: number): { structure: Structure; halfLength: number } {
@@ -55,7 +47,7 @@ function sinusoidalTipPotential(feedAmps: number, halfLength: number, mhz: numbe
 describe("RF voltage at the wire ends", () => {
   it("puts √(2PR) across the feed terminals", () => {
     // Source: D. M. Pozar, Microwave Engineering, 4th ed., Wiley 2012, §2.3 and §2.7 — power into a load P = ½·Re(V·I*), from memory
-    const band = plan({ family: "dipole", band: "20m", ...SITE }).bands[0];
+    const band = plan({ family: "dipole", band: "20m", ...TEST_SITE }).bands[0];
     const feed = band.endVoltages.points.find((point) => point.label === "Feed point terminals");
     expect(feed?.peakV).toBeCloseTo(Math.sqrt(2 * 100 * band.feedImpedanceAtCentre.r), 1);
     expect(feed?.rmsV).toBeCloseTo(Math.sqrt(100 * band.feedImpedanceAtCentre.r), 1);
@@ -80,7 +72,7 @@ describe("RF voltage at the wire ends", () => {
 
   it("gives an end-fed half-wave's far end a voltage like the one across its unun terminals (common practice)", () => {
     // common practice: both ends of a resonant half-wave wire swing to about the same voltage
-    const band = plan({ family: "end-fed", band: "40m", ...SITE }).bands[0];
+    const band = plan({ family: "end-fed", band: "40m", ...TEST_SITE }).bands[0];
     const feed = band.endVoltages.points.find((point) => point.label === "Feed point terminals")?.peakV ?? 0;
     const far = band.endVoltages.points.find((point) => point.label === "Tip of Radiator")?.peakV ?? 0;
     expect(feed).toBeGreaterThan(500);
@@ -99,7 +91,7 @@ describe("RF voltage at the wire ends", () => {
   });
 
   it("finds the open ends of a vertical: the top and every radial tip, not the hub", () => {
-    const band = plan({ family: "vertical", band: "20m", ...SITE, heightM: 6, radials: 3 }).bands[0];
+    const band = plan({ family: "vertical", band: "20m", ...TEST_SITE, heightM: 6, radials: 3 }).bands[0];
     expect(band.endVoltages.points.map((point) => point.label)).toEqual([
       "Feed point terminals",
       "Tip of Vertical",

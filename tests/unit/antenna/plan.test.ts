@@ -5,17 +5,9 @@ import { gammaFromSwr, inputGammaMagnitude, matchedLossDb, swrFromGamma } from "
 import { feedlineType } from "@/lib/antenna/feedline-types";
 import { plan, swrBandwidth, swrMinimum, sweepFrequencies, zeroCrossing } from "@/lib/antenna/plan";
 import { EngineInputError } from "@/lib/antenna/problems";
+import { TEST_SITE } from "../../fixtures/plan-requests";
 
-const SITE = {
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
-} as const;
-
-const DIPOLE = plan({ family: "dipole", band: "20m", ...SITE });
+const DIPOLE = plan({ family: "dipole", band: "20m", ...TEST_SITE });
 const BAND = DIPOLE.bands[0];
 
 describe("the plan's sweep", () => {
@@ -41,13 +33,13 @@ describe("the plan's sweep", () => {
 
   it("uses the region's band edges: 40 m reaches 7.3 MHz in Region 2", () => {
     // Source: ITU Radio Regulations, Art. 5 (Table of Frequency Allocations, 2020 ed., includes WRC-15/-19)
-    const result = plan({ family: "dipole", band: "40m", ...SITE, region: 2 });
+    const result = plan({ family: "dipole", band: "40m", ...TEST_SITE, region: 2 });
     expect(result.bands[0].band.highMHz).toBe(7.3);
     expect(result.bands[0].centreMHz).toBeCloseTo(7.15, 9);
   });
 
   it("tunes for a centre frequency inside a band when one is given", () => {
-    const result = plan({ family: "dipole", centreMHz: 14.06, ...SITE });
+    const result = plan({ family: "dipole", centreMHz: 14.06, ...TEST_SITE });
     expect(result.bands[0].band.name).toBe("20m");
     expect(result.bands[0].zeroReactanceMHz).toBeCloseTo(14.06, 2);
   });
@@ -74,7 +66,7 @@ describe("from the feed point to the radio", () => {
     const inBand = BAND.sweep.filter((point) => point.mhz >= 14 - 1e-9 && point.mhz <= 14.35 + 1e-9);
     expect(BAND.bandFitsUnder2to1).toBe(inBand.every((point) => point.radio.swr <= 2));
     expect(BAND.bandFitsUnder2to1).toBe(true);
-    const lossy = plan({ family: "off-centre-fed", band: "40m", ...SITE, feedPosition: 0.45 });
+    const lossy = plan({ family: "off-centre-fed", band: "40m", ...TEST_SITE, feedPosition: 0.45 });
     expect(lossy.bands[0].swrAtCentre.feed).toBeGreaterThan(2);
     expect(lossy.bands[0].bandFitsUnder2to1).toBe(false);
     expect(lossy.bands[0].swrBandwidth.feed).toBeNull();
@@ -108,7 +100,7 @@ describe("sweep helpers", () => {
 
 describe("what the plan shows beside the impedance", () => {
   it("echoes the request with its defaults filled in", () => {
-    const result = plan({ family: "inverted-v", band: "40m", ...SITE, heightM: 12 });
+    const result = plan({ family: "inverted-v", band: "40m", ...TEST_SITE, heightM: 12 });
     expect(result.request).toMatchObject({ family: "inverted-v", conductor: "copper", includedAngleDeg: 120 });
   });
 
@@ -160,39 +152,39 @@ describe("bad plan requests give `path: message` and no numbers", () => {
   it.each([
     ["not an object", "dipole", "request: must be a JSON object with a family"],
     ["null", null, "request: must be a JSON object with a family"],
-    ["an unknown family", { family: "yagi", band: "20m", ...SITE }, "family: must be one of dipole, inverted-v, vertical, end-fed, off-centre-fed, fan-dipole"],
-    ["no band", { family: "dipole", ...SITE }, "band: give either band or centreMHz, not both or neither"],
-    ["band and centre both", { family: "dipole", band: "20m", centreMHz: 14.1, ...SITE }, "band: give either band or centreMHz, not both or neither"],
-    ["a band the region lacks", { family: "dipole", band: "1.25m", ...SITE }, 'band: "1.25m" is not an amateur band in Region 1'],
-    ["a band below 160 m", { family: "dipole", band: "2200m", ...SITE }, "band: plans cover 160m to 70cm; 2200m is outside"],
-    ["a centre outside every band", { family: "dipole", centreMHz: 14.5, ...SITE }, "centreMHz: 14.5 MHz is not inside an amateur band in Region 1"],
-    ["a zero centre", { family: "dipole", centreMHz: 0, ...SITE }, "centreMHz: must be greater than 0"],
-    ["a centre above 450 MHz", { family: "dipole", centreMHz: 3000, ...SITE }, "centreMHz: must be between 1.8 and 450 MHz"],
-    ["region 4", { family: "dipole", band: "20m", ...SITE, region: 4 }, "region: must be the ITU Region, 1, 2 or 3"],
-    ["a negative height", { family: "dipole", band: "20m", ...SITE, heightM: -1 }, "heightM: must be greater than 0"],
-    ["a height in words", { family: "dipole", band: "20m", ...SITE, heightM: "ten" }, "heightM: must be a number (metres)"],
-    ["a zero wire diameter", { family: "dipole", band: "20m", ...SITE, wireDiameterMm: 0 }, "wireDiameterMm: must be greater than 0"],
-    ["an unknown conductor", { family: "dipole", band: "20m", ...SITE, conductor: "gold" }, "conductor: must be copper, aluminium or perfect"],
-    ["an unknown ground", { family: "dipole", band: "20m", ...SITE, ground: "sand" }, "ground: must be one of very-good, average, poor, sea-water, fresh-water, free-space, perfect, or { conductivitySm, relativePermittivity }"],
-    ["a negative conductivity", { family: "dipole", band: "20m", ...SITE, ground: { conductivitySm: -1, relativePermittivity: 13 } }, "ground.conductivitySm: must be greater than 0"],
-    ["a permittivity below 1", { family: "dipole", band: "20m", ...SITE, ground: { conductivitySm: 0.01, relativePermittivity: 0.5 } }, "ground.relativePermittivity: must be at least 1"],
-    ["an unknown coax", { family: "dipole", band: "20m", ...SITE, feedline: { type: "rg999", lengthM: 20 } }, "feedline.type: must be one of rg58, rg8x, rg213, rg174, rg6, window450"],
-    ["a negative run", { family: "dipole", band: "20m", ...SITE, feedline: { type: "rg58", lengthM: -3 } }, "feedline.lengthM: must be 0 or more"],
-    ["no feedline", { family: "dipole", band: "20m", ...SITE, feedline: undefined }, "feedline: must be { type, lengthM }"],
-    ["zero power", { family: "dipole", band: "20m", ...SITE, transmitter: { powerW: 0, mode: "ssb" } }, "transmitter.powerW: must be greater than 0"],
-    ["an unknown mode", { family: "dipole", band: "20m", ...SITE, transmitter: { powerW: 100, mode: "psk" } }, "transmitter.mode: must be one of ssb, cw, fm, digital, am, carrier"],
-    ["a transmit time above 1", { family: "dipole", band: "20m", ...SITE, transmitter: { powerW: 100, mode: "ssb", transmitTimeFraction: 1.5 } }, "transmitter.transmitTimeFraction: must be at most 1"],
-    ["an unknown field", { family: "dipole", band: "20m", ...SITE, colour: "red" }, 'request: unknown field "colour"'],
-    ["another family's field", { family: "dipole", band: "20m", ...SITE, radials: 4 }, 'request: unknown field "radials"'],
-    ["a narrow inverted-V", { family: "inverted-v", band: "40m", ...SITE, includedAngleDeg: 30 }, "includedAngleDeg: must be at least 60° (narrower legs couple too closely)"],
-    ["half a radial", { family: "vertical", band: "20m", ...SITE, radials: 2.5 }, "radials: must be a whole number"],
-    ["radials hanging straight down", { family: "vertical", band: "20m", ...SITE, radialDroopDeg: 90 }, "radialDroopDeg: must be at most 80°"],
-    ["a 9:1 unun on an end-fed half-wave", { family: "end-fed", band: "20m", ...SITE, unun: "9:1" }, "unun: must be 49:1 or 64:1"],
-    ["a feed past the middle", { family: "off-centre-fed", band: "40m", ...SITE, feedPosition: 0.7 }, "feedPosition: must be at most 0.5"],
-    ["a fan with one band", { family: "fan-dipole", bands: ["40m"], ...SITE }, "bands: must name 2 or 3 bands"],
-    ["a fan naming a band twice", { family: "fan-dipole", bands: ["40m", "40m"], ...SITE }, "bands[1]: 40m is named twice"],
-    ["a fan with a made-up band", { family: "fan-dipole", bands: ["40m", "11m"], ...SITE }, 'bands[1]: "11m" is not an amateur band in Region 1'],
-    ["a fan spread too wide", { family: "fan-dipole", bands: ["40m", "20m"], ...SITE, spreadDeg: 60 }, "spreadDeg: must be at most 45°"],
+    ["an unknown family", { family: "yagi", band: "20m", ...TEST_SITE }, "family: must be one of dipole, inverted-v, vertical, end-fed, off-centre-fed, fan-dipole"],
+    ["no band", { family: "dipole", ...TEST_SITE }, "band: give either band or centreMHz, not both or neither"],
+    ["band and centre both", { family: "dipole", band: "20m", centreMHz: 14.1, ...TEST_SITE }, "band: give either band or centreMHz, not both or neither"],
+    ["a band the region lacks", { family: "dipole", band: "1.25m", ...TEST_SITE }, 'band: "1.25m" is not an amateur band in Region 1'],
+    ["a band below 160 m", { family: "dipole", band: "2200m", ...TEST_SITE }, "band: plans cover 160m to 70cm; 2200m is outside"],
+    ["a centre outside every band", { family: "dipole", centreMHz: 14.5, ...TEST_SITE }, "centreMHz: 14.5 MHz is not inside an amateur band in Region 1"],
+    ["a zero centre", { family: "dipole", centreMHz: 0, ...TEST_SITE }, "centreMHz: must be greater than 0"],
+    ["a centre above 450 MHz", { family: "dipole", centreMHz: 3000, ...TEST_SITE }, "centreMHz: must be between 1.8 and 450 MHz"],
+    ["region 4", { family: "dipole", band: "20m", ...TEST_SITE, region: 4 }, "region: must be the ITU Region, 1, 2 or 3"],
+    ["a negative height", { family: "dipole", band: "20m", ...TEST_SITE, heightM: -1 }, "heightM: must be greater than 0"],
+    ["a height in words", { family: "dipole", band: "20m", ...TEST_SITE, heightM: "ten" }, "heightM: must be a number (metres)"],
+    ["a zero wire diameter", { family: "dipole", band: "20m", ...TEST_SITE, wireDiameterMm: 0 }, "wireDiameterMm: must be greater than 0"],
+    ["an unknown conductor", { family: "dipole", band: "20m", ...TEST_SITE, conductor: "gold" }, "conductor: must be copper, aluminium or perfect"],
+    ["an unknown ground", { family: "dipole", band: "20m", ...TEST_SITE, ground: "sand" }, "ground: must be one of very-good, average, poor, sea-water, fresh-water, free-space, perfect, or { conductivitySm, relativePermittivity }"],
+    ["a negative conductivity", { family: "dipole", band: "20m", ...TEST_SITE, ground: { conductivitySm: -1, relativePermittivity: 13 } }, "ground.conductivitySm: must be greater than 0"],
+    ["a permittivity below 1", { family: "dipole", band: "20m", ...TEST_SITE, ground: { conductivitySm: 0.01, relativePermittivity: 0.5 } }, "ground.relativePermittivity: must be at least 1"],
+    ["an unknown coax", { family: "dipole", band: "20m", ...TEST_SITE, feedline: { type: "rg999", lengthM: 20 } }, "feedline.type: must be one of rg58, rg8x, rg213, rg174, rg6, window450"],
+    ["a negative run", { family: "dipole", band: "20m", ...TEST_SITE, feedline: { type: "rg58", lengthM: -3 } }, "feedline.lengthM: must be 0 or more"],
+    ["no feedline", { family: "dipole", band: "20m", ...TEST_SITE, feedline: undefined }, "feedline: must be { type, lengthM }"],
+    ["zero power", { family: "dipole", band: "20m", ...TEST_SITE, transmitter: { powerW: 0, mode: "ssb" } }, "transmitter.powerW: must be greater than 0"],
+    ["an unknown mode", { family: "dipole", band: "20m", ...TEST_SITE, transmitter: { powerW: 100, mode: "psk" } }, "transmitter.mode: must be one of ssb, cw, fm, digital, am, carrier"],
+    ["a transmit time above 1", { family: "dipole", band: "20m", ...TEST_SITE, transmitter: { powerW: 100, mode: "ssb", transmitTimeFraction: 1.5 } }, "transmitter.transmitTimeFraction: must be at most 1"],
+    ["an unknown field", { family: "dipole", band: "20m", ...TEST_SITE, colour: "red" }, 'request: unknown field "colour"'],
+    ["another family's field", { family: "dipole", band: "20m", ...TEST_SITE, radials: 4 }, 'request: unknown field "radials"'],
+    ["a narrow inverted-V", { family: "inverted-v", band: "40m", ...TEST_SITE, includedAngleDeg: 30 }, "includedAngleDeg: must be at least 60° (narrower legs couple too closely)"],
+    ["half a radial", { family: "vertical", band: "20m", ...TEST_SITE, radials: 2.5 }, "radials: must be a whole number"],
+    ["radials hanging straight down", { family: "vertical", band: "20m", ...TEST_SITE, radialDroopDeg: 90 }, "radialDroopDeg: must be at most 80°"],
+    ["a 9:1 unun on an end-fed half-wave", { family: "end-fed", band: "20m", ...TEST_SITE, unun: "9:1" }, "unun: must be 49:1 or 64:1"],
+    ["a feed past the middle", { family: "off-centre-fed", band: "40m", ...TEST_SITE, feedPosition: 0.7 }, "feedPosition: must be at most 0.5"],
+    ["a fan with one band", { family: "fan-dipole", bands: ["40m"], ...TEST_SITE }, "bands: must name 2 or 3 bands"],
+    ["a fan naming a band twice", { family: "fan-dipole", bands: ["40m", "40m"], ...TEST_SITE }, "bands[1]: 40m is named twice"],
+    ["a fan with a made-up band", { family: "fan-dipole", bands: ["40m", "11m"], ...TEST_SITE }, 'bands[1]: "11m" is not an amateur band in Region 1'],
+    ["a fan spread too wide", { family: "fan-dipole", bands: ["40m", "20m"], ...TEST_SITE, spreadDeg: 60 }, "spreadDeg: must be at most 45°"],
   ] as const)("%s", (_name, request, expected) => {
     expect(problemsOf(request)).toEqual([expected]);
   });

@@ -1,17 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { EngineInputError } from "@/lib/antenna/problems";
 import { ruleOfThumbLength, trim } from "@/lib/antenna/trim";
-
-const SITE = {
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
-} as const;
-
-const DIPOLE_14_2 = { family: "dipole", centreMHz: 14.2, ...SITE } as const;
+import { DIPOLE_14_2, TEST_SITE } from "../../fixtures/plan-requests";
 
 describe("trimming from a measured resonance", () => {
   it("scales the length by f_measured / f_target: 10.20 m at 13.90 MHz becomes 9.985 m for 14.20 MHz (common practice)", () => {
@@ -49,7 +39,7 @@ describe("trimming from a measured resonance", () => {
   });
 
   it("starts from the plan's own lengths when none are given, and trims each fan element for its own band", () => {
-    const result = trim({ plan: { family: "fan-dipole", bands: ["40m", "20m"], ...SITE }, measuredMHz: [7.0, 14.3] });
+    const result = trim({ plan: { family: "fan-dipole", bands: ["40m", "20m"], ...TEST_SITE }, measuredMHz: [7.0, 14.3] });
     expect(result.elements.map((element) => element.band)).toEqual(["40m", "20m"]);
     expect(result.engine?.[0].changeM).toBeLessThan(0);
     expect(result.engine?.[1].changeM).toBeGreaterThan(0);
@@ -59,7 +49,7 @@ describe("trimming from a measured resonance", () => {
   });
 
   it("trims an end-fed half-wave by its SWR dip", () => {
-    const result = trim({ plan: { family: "end-fed", band: "40m", ...SITE }, measuredMHz: [6.95] });
+    const result = trim({ plan: { family: "end-fed", band: "40m", ...TEST_SITE }, measuredMHz: [6.95] });
     expect(result.elements[0].modelMHz).not.toBeNull();
     expect(result.engine?.map((piece) => piece.label)).toEqual(["Radiator", "Counterpoise"]);
     expect(result.engine?.[0].changeM).toBeLessThan(0);
@@ -79,9 +69,9 @@ function problemsOf(request: unknown): string[] {
 
 describe("bad trim requests give `path: message`", () => {
   it.each([
-    ["a bad plan inside", { plan: { family: "dipole", band: "11m", ...SITE }, measuredMHz: [27] }, ['plan.band: "11m" is not an amateur band in Region 1']],
+    ["a bad plan inside", { plan: { family: "dipole", band: "11m", ...TEST_SITE }, measuredMHz: [27] }, ['plan.band: "11m" is not an amateur band in Region 1']],
     ["no measurement", { plan: DIPOLE_14_2, measuredMHz: [] }, ["measuredMHz: must give at least one measured resonance"]],
-    ["one measurement for two elements", { plan: { family: "fan-dipole", bands: ["40m", "20m"], ...SITE }, measuredMHz: [7.0] }, ["measuredMHz: must give 2 values, one per element"]],
+    ["one measurement for two elements", { plan: { family: "fan-dipole", bands: ["40m", "20m"], ...TEST_SITE }, measuredMHz: [7.0] }, ["measuredMHz: must give 2 values, one per element"]],
     ["a measurement far from the band", { plan: DIPOLE_14_2, measuredMHz: [7.1] }, ["measuredMHz[0]: 7.1 MHz is far from the element's 14.2 MHz; check the sweep is of this antenna"]],
     ["a length in feet", { plan: DIPOLE_14_2, builtLengthsM: [33.5], measuredMHz: [14.1] }, ["builtLengthsM[0]: 33.5 m is far from this element's rule-of-thumb 10.0455 m; check it is the whole element in metres"]],
     ["a negative length", { plan: DIPOLE_14_2, builtLengthsM: [-1], measuredMHz: [14.1] }, ["builtLengthsM[0]: must be greater than 0"]],

@@ -10,17 +10,7 @@ import { compareWithPlan, measuredOffsets, trimRequestOf, type TrimOutcome } fro
 import { sweepViews, type FeedChain, type SweepPlace } from "@/lib/sweeps/feed-point";
 import { meanOffsets, nextCut } from "@/lib/sweeps/next-cut";
 import type { MeasuredPoint } from "@/lib/sweeps/parse";
-
-const DIPOLE_14_2 = {
-  family: "dipole",
-  centreMHz: 14.2,
-  region: 1,
-  heightM: 10,
-  wireDiameterMm: 2,
-  ground: "average",
-  feedline: { type: "rg213", lengthM: 20 },
-  transmitter: { powerW: 100, mode: "ssb" },
-} as const;
+import { DIPOLE_14_2 } from "../../fixtures/plan-requests";
 
 let dipole: PlanResult;
 let chain: FeedChain;
