@@ -1,5 +1,5 @@
 // Shared steps for browser tests: the demo accounts (seeded into the e2e database) and signing in.
-import { expect, type APIRequestContext, type Page } from "@playwright/test";
+import { expect, request as playwrightRequest, type APIRequestContext, type Page } from "@playwright/test";
 
 export const demoPassword = "demo-antenna-day";
 export const demoAccounts = {
@@ -25,4 +25,23 @@ export async function signInApi(request: APIRequestContext, role: DemoRole) {
     form: { csrfToken, email: demoAccounts[role], password: demoPassword, json: "true" },
   });
   expect(response.ok()).toBe(true);
+}
+
+/**
+ * API request contexts for route tests, each signed in as a role (or signed out with `null`);
+ * register `disposeAll` with `test.afterAll` to close them after the file's tests.
+ */
+export function roleContexts() {
+  const contexts: APIRequestContext[] = [];
+  return {
+    async as(role: DemoRole | null, baseURL: string): Promise<APIRequestContext> {
+      const context = await playwrightRequest.newContext({ baseURL });
+      contexts.push(context);
+      if (role) await signInApi(context, role);
+      return context;
+    },
+    disposeAll: async () => {
+      await Promise.all(contexts.map((context) => context.dispose()));
+    },
+  };
 }

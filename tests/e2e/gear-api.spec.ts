@@ -1,21 +1,15 @@
 // Role rules on every gear and lending route, against the real server: signed-out 401, a role
 // that may not act 403, a missing resource 404. Source: Guyline issue 5, item 7, and the
 // product brief's role table (shared/design/product.md, "Roles").
-import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
-import { signInApi, type DemoRole } from "./fixtures";
+import { expect, test } from "@playwright/test";
+import { roleContexts } from "./fixtures";
 
 const missing = "00000000-0000-4000-8000-00000000dead";
 // Source: W3C PNG Specification (Third Edition), §5.2 PNG signature.
 const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52]);
 
-const contexts: APIRequestContext[] = [];
-async function as(role: DemoRole | null, baseURL: string): Promise<APIRequestContext> {
-  const context = await playwrightRequest.newContext({ baseURL });
-  contexts.push(context);
-  if (role) await signInApi(context, role);
-  return context;
-}
-test.afterAll(async () => Promise.all(contexts.map((context) => context.dispose())));
+const { as, disposeAll } = roleContexts();
+test.afterAll(disposeAll);
 
 const label = (prefix: string) => `${prefix}-${Date.now().toString(36).slice(-6).toUpperCase()}`;
 const inDays = (days: number, hour: number) => `${new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10)}T${String(hour).padStart(2, "0")}:00`;

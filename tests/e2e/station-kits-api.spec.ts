@@ -2,19 +2,13 @@
 // 404, bad input 400 naming the field, a booking 201 and a clash 409 with the next free time.
 // Source: Guyline issue 5, item 4 "Station kits", and the product brief's role table
 // (shared/design/product.md, "Roles": the gear steward and the coordinator keep the lending desk).
-import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
-import { signInApi, type DemoRole } from "./fixtures";
+import { expect, test, type APIRequestContext } from "@playwright/test";
+import { roleContexts } from "./fixtures";
 
 const missing = "00000000-0000-4000-8000-00000000beef";
 
-const contexts: APIRequestContext[] = [];
-async function as(role: DemoRole | null, baseURL: string): Promise<APIRequestContext> {
-  const context = await playwrightRequest.newContext({ baseURL });
-  contexts.push(context);
-  if (role) await signInApi(context, role);
-  return context;
-}
-test.afterAll(async () => Promise.all(contexts.map((context) => context.dispose())));
+const { as, disposeAll } = roleContexts();
+test.afterAll(disposeAll);
 
 async function idOf(context: APIRequestContext, path: string, key: string, field: string, value: string): Promise<string> {
   const rows: Record<string, string>[] = (await (await context.get(path)).json())[key];

@@ -2,19 +2,13 @@
 // who does not take part in the day (or a newcomer) 403, a missing slot or sweep 404, a bad
 // file or bad fields 400 with the line named. Source: Guyline issue 7, item 5, and the product
 // brief's role table (shared/design/product.md, "Roles").
-import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
-import { signInApi, type DemoRole } from "./fixtures";
+import { expect, test, type APIRequestContext } from "@playwright/test";
+import { roleContexts } from "./fixtures";
 
 const missing = "00000000-0000-4000-8000-00000000beef";
 
-const contexts: APIRequestContext[] = [];
-async function as(role: DemoRole | null, baseURL: string): Promise<APIRequestContext> {
-  const context = await playwrightRequest.newContext({ baseURL });
-  contexts.push(context);
-  if (role) await signInApi(context, role);
-  return context;
-}
-test.afterAll(async () => Promise.all(contexts.map((context) => context.dispose())));
+const { as, disposeAll } = roleContexts();
+test.afterAll(disposeAll);
 
 /** A demo day's slots by name (the member operated on the past autumn day, and takes no part in the spring one). */
 async function slotsOf(context: APIRequestContext, title: string): Promise<Record<string, string>> {
