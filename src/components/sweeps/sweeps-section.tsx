@@ -3,13 +3,13 @@
 // those who may upload. The plan screen below draws the chosen sweep over its charts.
 import Link from "next/link";
 import { tableClass } from "@/components/antenna-plan/table-class";
+import { DeleteButton } from "@/components/ui/delete-button";
 import { Card, EmptyState } from "@/components/ui/notice";
 import { formatMHz, type Units } from "@/lib/plan-screen/format";
 import { PLACE_LABELS } from "@/lib/sweeps/feed-point";
 import { QUANTITY_LABELS } from "@/lib/sweeps/parse";
 import { formatInZone } from "@/lib/time";
 import type { SweepAccess, SweepDetailDto, SweepSummaryDto } from "@/server/services/sweeps";
-import { DeleteSweepButton } from "./delete-sweep-button";
 import { sweepHref } from "./sweep-href";
 import { SweepAnalysis, shiftText } from "./sweep-analysis";
 import { SweepUploadForm, type SweepUploadFormProps } from "./sweep-upload-form";
@@ -84,7 +84,9 @@ export function SweepsSection({ sweeps, selected, planChanged, access, upload, t
                           Show <span className="sr-only">&nbsp;the sweep of {when(sweep)}</span>
                         </Link>
                       )}
-                      {sweep.canDelete && <DeleteSweepButton sweepId={sweep.id} label={when(sweep)} pagePath={upload.pagePath} />}
+                      {sweep.canDelete && (
+                        <DeleteButton url={`/api/sweeps/${sweep.id}`} verb="Delete" what={`the sweep of ${when(sweep)}`} confirm={`Delete the sweep of ${when(sweep)} and its file?`} then={upload.pagePath} />
+                      )}
                     </td>
                   </tr>
                 ))}

@@ -5,12 +5,12 @@ import { ConditionBadge, StateBadge } from "@/components/gear/badges";
 import { detailSummary } from "@/components/gear/describe";
 import { FileUpload } from "@/components/gear/file-upload";
 import { HistoryList } from "@/components/gear/history-list";
-import { RemoveFileButton } from "@/components/gear/remove-file-button";
 import { RetireForm } from "@/components/gear/retire-form";
 import { BookingSteps } from "@/components/lending/booking-steps";
 import { RequestForm } from "@/components/lending/request-form";
 import { WaitlistButtons } from "@/components/lending/waitlist-offer";
 import { ButtonLink } from "@/components/ui/button";
+import { DeleteButton } from "@/components/ui/delete-button";
 import { Card, Notice, PageHeader } from "@/components/ui/notice";
 import { approvalRuleLabels, gearKindLabels, type ShelfCondition } from "@/lib/gear/kinds";
 import { nextActionFor, type NextAction } from "@/lib/lending/next-action";
@@ -163,7 +163,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
                   {/* eslint-disable-next-line @next/next/no-img-element -- stored files are served by Guyline's own route */}
                   <img src={photo.url} alt={`Photo of ${item.name}: ${photo.fileName}`} className="h-32 w-auto rounded-lg border border-slate-200 object-cover" />
                 </a>
-                {keeper && <RemoveFileButton url={photo.url} fileName={photo.fileName} />}
+                {keeper && <DeleteButton url={photo.url} verb="Remove" what={photo.fileName} />}
               </li>
             ))}
           </ul>
@@ -172,7 +172,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
           <ul className="mt-3 list-disc pl-5">
             {manuals.map((manual) => (
               <li key={manual.id}>
-                <a href={manual.url}>{manual.fileName}</a> ({Math.ceil(manual.byteSize / 1024)} KB) {keeper && <RemoveFileButton url={manual.url} fileName={manual.fileName} />}
+                <a href={manual.url}>{manual.fileName}</a> ({Math.ceil(manual.byteSize / 1024)} KB) {keeper && <DeleteButton url={manual.url} verb="Remove" what={manual.fileName} />}
               </li>
             ))}
           </ul>
