@@ -1,29 +1,16 @@
 "use client";
-// The gear shelf: a TanStack Table over /api/gear, sorted, filtered and paged by the server.
-import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import {
-  columnFilteringFeature,
-  createColumnHelper,
-  rowPaginationFeature,
-  rowSortingFeature,
-  tableFeatures,
-  useTable,
-  type ColumnFiltersState,
-  type PaginationState,
-  type SortingState,
-} from "@tanstack/react-table";
+// The gear shelf: a server-side table over /api/gear, sorted, filtered and paged by the server.
+import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import { Pager, SortButton } from "@/components/ui/table-parts";
+import { ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
 import { gearConditionLabels, gearConditions, gearKindLabels, gearKinds, type GearCondition, type GearKind } from "@/lib/gear/kinds";
 import { formatInZone } from "@/lib/time";
-import type { GearListRow, GearPage } from "@/server/services/gear";
+import type { GearListRow } from "@/server/services/gear";
 import { ConditionBadge } from "./badges";
 import { detailSummary } from "./describe";
 
-const features = tableFeatures({ rowSortingFeature, columnFilteringFeature, rowPaginationFeature });
-const helper = createColumnHelper<typeof features, GearListRow>();
-const emptyRows: GearListRow[] = [];
+const helper = createColumnHelper<typeof serverTableFeatures, GearListRow>();
 
 function availabilityText(row: GearListRow, timeZone: string): string {
   const { availability } = row;
@@ -60,68 +47,21 @@ function buildColumns(timeZone: string) {
   ]);
 }
 
-function queryString(params: Record<string, string | number | boolean | undefined>): string {
-  const search = new URLSearchParams();
-  for (const [key, value] of Object.entries(params)) if (value !== undefined && value !== "" && value !== false) search.set(key, String(value));
-  return search.toString();
-}
-
 export function ShelfTable({ timeZone }: { timeZone: string }) {
   const columns = useMemo(() => buildColumns(timeZone), [timeZone]);
-  const [sorting, setSorting] = useState<SortingState>([{ id: "labelCode", desc: false }]);
-  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
-  const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 20 });
   const [availableOn, setAvailableOn] = useState("");
   const [search, setSearch] = useState("");
   const [includeRetired, setIncludeRetired] = useState(false);
-
-  const filterValue = (id: string) => (columnFilters.find((filter) => filter.id === id)?.value as string | undefined) ?? "";
-  const setFilter = (id: string, value: string) => {
-    setColumnFilters((filters) => [...filters.filter((filter) => filter.id !== id), ...(value ? [{ id, value }] : [])]);
-    setPagination((page) => ({ ...page, pageIndex: 0 }));
-  };
-
-  const params = {
-    page: pagination.pageIndex + 1,
-    pageSize: pagination.pageSize,
-    sort: sorting[0]?.id ?? "labelCode",
-    dir: sorting[0]?.desc ? "desc" : "asc",
-    kind: filterValue("kind"),
-    condition: filterValue("condition"),
-    availableOn,
-    q: search.trim(),
-    includeRetired,
-  };
-  const result = useQuery({
-    queryKey: ["gear", params],
-    queryFn: async (): Promise<GearPage> => {
-      const response = await fetch(`/api/gear?${queryString(params)}`);
-      if (!response.ok) throw new Error((await response.json()).message ?? "The shelf could not be loaded.");
-      return response.json();
-    },
-    placeholderData: keepPreviousData,
-  });
-
-  const table = useTable({
-    features,
+  const { table, result, pagination, filterValue, setFilter, firstPage, csvHref } = useServerTable({
+    queryKey: "gear",
+    endpoint: "/api/gear",
     columns,
-    data: result.data?.rows ?? emptyRows,
-    rowCount: result.data?.rowCount ?? 0,
-    getRowId: (row) => row.id,
-    state: { sorting, columnFilters, pagination },
-    onSortingChange: (updater) => {
-      setSorting(updater);
-      setPagination((page) => ({ ...page, pageIndex: 0 }));
-    },
-    onColumnFiltersChange: setColumnFilters,
-    onPaginationChange: setPagination,
-    manualSorting: true,
-    manualFiltering: true,
-    manualPagination: true,
-    enableSortingRemoval: false,
+    initialSort: { id: "labelCode", desc: false },
+    filterParams: { kind: "kind", condition: "condition" },
+    extraParams: { availableOn, q: search.trim(), includeRetired },
+    noun: "The shelf",
   });
 
-  const sortable = new Set(["labelCode", "name", "kind", "condition", "location"]);
   return (
     <div>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5" role="search" aria-label="Filter the shelf">
@@ -155,7 +95,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
             value={availableOn}
             onChange={(event) => {
               setAvailableOn(event.target.value);
-              setPagination((page) => ({ ...page, pageIndex: 0 }));
+              firstPage();
             }}
           />
         </label>
@@ -168,7 +108,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
             value={search}
             onChange={(event) => {
               setSearch(event.target.value);
-              setPagination((page) => ({ ...page, pageIndex: 0 }));
+              firstPage();
             }}
           />
         </label>
@@ -178,54 +118,11 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
         </label>
       </div>
       <p className="mt-3 text-sm">
-        <a href={`/api/gear?${queryString({ ...params, page: undefined, pageSize: undefined, format: "csv" })}`} download>
+        <a href={csvHref} download>
           Download these items as CSV
         </a>
       </p>
-      {result.isError && <p role="alert" className="font-bold text-danger-600">{result.error.message}</p>}
-      {result.isPending && <p className="mt-3 text-slate-600" role="status">Loading the items…</p>}
-      <div className="mt-3 overflow-x-auto">
-        <table className="w-full text-left" aria-busy={result.isFetching}>
-          <thead>
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id} className="border-b border-slate-300 text-sm">
-                {group.headers.map((header) => (
-                  <th key={header.id} scope="col" className="py-1 pr-3" aria-sort={header.column.getIsSorted() === "asc" ? "ascending" : header.column.getIsSorted() === "desc" ? "descending" : undefined}>
-                    <SortButton
-                      label={<table.FlexRender header={header} />}
-                      sorted={header.column.getIsSorted()}
-                      onToggle={sortable.has(header.column.id) ? header.column.getToggleSortingHandler() : undefined}
-                    />
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-slate-200 align-top" data-testid={`gear-row-${row.original.labelCode}`}>
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="py-2 pr-3">
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {result.data && result.data.rows.length === 0 && <p className="py-4 text-slate-600">No items match these filters.</p>}
-      </div>
-      <Pager
-        pageIndex={pagination.pageIndex}
-        pageCount={table.getPageCount()}
-        rowCount={result.data?.rowCount ?? 0}
-        canPrevious={table.getCanPreviousPage()}
-        canNext={table.getCanNextPage()}
-        onPrevious={() => table.previousPage()}
-        onNext={() => table.nextPage()}
-        pageSize={pagination.pageSize}
-        onPageSize={(size) => table.setPageSize(size)}
-      />
+      <ServerTable table={table} result={result} pagination={pagination} plural="items" rowTestId={(row) => `gear-row-${row.labelCode}`} />
     </div>
   );
 }
