@@ -11,13 +11,14 @@ import { enqueueMail } from "@/server/mail/outbox";
 import { runReminderSweep } from "@/server/mail/reminders";
 import { cancelSignup, signUpForSession } from "@/server/services/build-sessions";
 import { readUnsubscribeToken } from "@/server/services/mail-preferences";
-import { capturedFor, outboxFor, resolvesToRoute, smtpPort, startWorkerProcess, waitFor, type WorkerProcess } from "./mail-helpers";
+import { capturedFor, outboxFor, resolvesToRoute, setAsidePendingMail, smtpPort, startWorkerProcess, waitFor, type WorkerProcess } from "./mail-helpers";
 import { createPerson, scheduleSession } from "./helpers";
 
 let capture: CaptureServer | null = null;
 let worker: WorkerProcess;
 
 beforeAll(async () => {
+  await setAsidePendingMail();
   capture = await startCaptureServer(smtpPort);
   worker = await startWorkerProcess();
 });

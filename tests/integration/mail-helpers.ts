@@ -8,6 +8,7 @@ import ICAL from "ical.js";
 import { simpleParser, type ParsedMail } from "mailparser";
 import { db } from "@/server/db";
 import { capturedMail, mailOutbox } from "@/server/db/schema";
+import { newJobQueue, queueNames } from "@/server/jobs/queue";
 import { deliverOutboxMessage } from "@/server/mail/delivery";
 import { createMailTransport } from "@/server/mail/transport";
 
@@ -17,6 +18,22 @@ export interface WorkerProcess {
   child: ChildProcess;
   output: string[];
   stop(signal?: NodeJS.Signals): Promise<void>;
+}
+
+/**
+ * Sets aside the mail earlier test files left pending (publishing a day writes to every member
+ * of the test database: thousands of messages), so a worker started next sends only what its
+ * own file's tests cause. The set-aside rows are `skipped`, which delivery leaves alone.
+ */
+export async function setAsidePendingMail(): Promise<void> {
+  const boss = newJobQueue({ supervise: false, schedule: false, max: 1 });
+  await boss.start();
+  try {
+    await boss.purgeQueue(queueNames.deliverMail);
+  } finally {
+    await boss.stop({ graceful: false });
+  }
+  await db().update(mailOutbox).set({ status: "skipped" }).where(eq(mailOutbox.status, "pending"));
 }
 
 /** Starts scripts/worker.ts against the test database and the given SMTP port; resolves once it runs. */
