@@ -1,6 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
+import { useWatch } from "react-hook-form";
 import { useActionForm } from "@/components/forms/use-action-form";
 import { Button } from "@/components/ui/button";
 import { CheckboxField, FieldShell, SelectField, TextAreaField, TextField } from "@/components/ui/field";
@@ -42,7 +43,9 @@ export function SessionForm({ choices, defaults, action, submitLabel }: SessionF
       if (id) router.push(`/build-sessions/${id}`);
     },
   });
-  const family = form.watch("plan.family");
+  // useWatch, not form.watch: choosing a library plan sets all of "plan" at once, and only a
+  // value subscription hears a change of the parent object.
+  const family = useWatch({ control: form.control, name: "plan.family" });
   const register = form.register;
   const libraryPlan = register("libraryPlanId", {
     onChange: (event: { target: { value: string } }) => {

@@ -5,7 +5,7 @@
 // the slot's plan with every candidate coax run; the slots load one after another so a day with
 // many slots never floods the engine's queue. A booking refreshes the page; the slot's
 // suggestions follow, because what is booked is part of their query key.
-import { useQuery } from "@tanstack/react-query";
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useState, useTransition, type ReactNode } from "react";
 import { bookKitAction } from "@/app/(club)/antenna-days/[dayId]/kit/actions";
@@ -67,6 +67,9 @@ function SlotKitCard({ slot, units, bookable, enabled, onSettled }: { slot: Boar
       if (!response.ok) throw new Error(body.message ?? "The slot's kit could not be loaded.");
       return body.kit;
     },
+    // While a booking's refresh recomputes the kit, the last suggestions (and the booking's
+    // confirmation above them) stay on screen.
+    placeholderData: keepPreviousData,
   });
   const { isPending, isFetching } = query;
   useEffect(() => {
@@ -74,7 +77,7 @@ function SlotKitCard({ slot, units, bookable, enabled, onSettled }: { slot: Boar
   }, [isPending, isFetching, onSettled, slot.id]);
 
   return (
-    <section aria-label={`Station kit for ${slot.name}`} data-testid={`slot-kit-${slot.name}`} className="mb-6 rounded-xl border border-slate-200 bg-white p-4 shadow-sm sm:p-6">
+    <section aria-label={`Station kit for ${slot.name}`} aria-busy={isFetching} data-testid={`slot-kit-${slot.name}`} className="mb-6 rounded-xl border border-slate-200 bg-white p-4 shadow-sm sm:p-6">
       <h2 className="mb-1">{slot.name}</h2>
       <p className="text-sm text-slate-700">
         {slot.bands.join(", ")} · feedline run {formatDistance(slot.runM, units)}
