@@ -74,10 +74,10 @@ test("a coordinator schedules a build session from a library plan, and the plan 
   await expect(page.getByLabel("Antenna", { exact: true })).toHaveValue("inverted-v");
   await expect(page.getByLabel("Band")).toHaveValue("40m");
   await expect(page.getByLabel("Angle between the legs (°)")).toBeVisible();
-  await page.getByLabel("Title").fill(title);
-  await page.getByLabel("Place").fill("Club hut");
-  await page.getByLabel("Starts").fill(`${date}T18:00`);
-  await page.getByLabel("Ends").fill(`${date}T21:00`);
+  await page.getByLabel("Title", { exact: true }).fill(title);
+  await page.getByLabel("Place", { exact: true }).fill("Club hut");
+  await page.getByLabel("Starts", { exact: true }).fill(`${date}T18:00`);
+  await page.getByLabel("Ends", { exact: true }).fill(`${date}T21:00`);
   await page.locator('input[name="mentorIds"]').first().check();
   await page.getByRole("button", { name: "Schedule the session" }).click();
   await expect(page.getByRole("heading", { name: title })).toBeVisible({ timeout: 30_000 });
