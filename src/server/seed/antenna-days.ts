@@ -1,8 +1,10 @@
 // The demo's antenna days: the club's invented home site with a power line, a footpath, a
-// picnic lawn, trees and a hut; two upcoming days in 2027 with five and four station slots on
-// different bands and antenna families, shifts and some sign-ups; and one past day, done.
+// picnic lawn, trees and a hut; two upcoming days with five and four station slots on different
+// bands and antenna families, shifts and some sign-ups; and one past day, done. Days fall on
+// Saturdays counted from the day the demo is seeded, so the demo stays current.
 // Every slot's plan is computed by the engine, as the app does when a slot is saved.
 import { eq, sql } from "drizzle-orm";
+import { Temporal } from "temporal-polyfill";
 import { plan, planRequestSchema, type ItuRegion } from "@/lib/antenna";
 import { bandByName } from "@/lib/antenna/bands";
 import { antennaSummaryOf } from "@/lib/antenna-days/antenna-outline";
@@ -33,14 +35,16 @@ interface DemoSlot {
   at: [number, number];
   azimuthDeg: number;
   tent: [number, number];
-  /** Shifts as club-time hours on the day, with capacity and the demo people signed up. */
-  shifts: { from: string; to: string; capacity: number; people: string[] }[];
+  /** Shifts as club-time hours on the day (`onDay: 1` for a weekend's Sunday), with capacity and the demo people signed up. */
+  shifts: { onDay?: number; from: string; to: string; capacity: number; people: string[] }[];
 }
 
 interface DemoDay {
   title: string;
-  date: string;
-  endDate?: string;
+  /** The Saturday this many weeks after the coming one (negative: in the past). */
+  saturdayInWeeks: number;
+  /** 2 for a weekend: it ends on the Sunday. */
+  lengthDays?: number;
   from: string;
   to: string;
   status: "published" | "done";
@@ -55,7 +59,7 @@ const wire = { wireDiameterMm: 2, feedlineType: "rg213" } as const;
 const days: DemoDay[] = [
   {
     title: "Spring antenna day",
-    date: "2027-04-17",
+    saturdayInWeeks: 19,
     from: "09:00",
     to: "17:00",
     status: "published",
@@ -128,8 +132,8 @@ const days: DemoDay[] = [
   },
   {
     title: "Midsummer field weekend",
-    date: "2027-06-26",
-    endDate: "2027-06-27",
+    saturdayInWeeks: 29,
+    lengthDays: 2,
     from: "10:00",
     to: "16:00",
     status: "published",
@@ -147,8 +151,8 @@ const days: DemoDay[] = [
         azimuthDeg: 90,
         tent: [70, 92],
         shifts: [
-          { from: "2027-06-26T10:00", to: "2027-06-26T14:00", capacity: 2, people: ["rosa@demo.test"] },
-          { from: "2027-06-26T14:00", to: "2027-06-26T18:00", capacity: 2, people: [] },
+          { from: "10:00", to: "14:00", capacity: 2, people: ["rosa@demo.test"] },
+          { from: "14:00", to: "18:00", capacity: 2, people: [] },
         ],
       },
       {
@@ -160,7 +164,7 @@ const days: DemoDay[] = [
         at: [140, 75],
         azimuthDeg: 0,
         tent: [125, 70],
-        shifts: [{ from: "2027-06-26T10:00", to: "2027-06-26T16:00", capacity: 2, people: ["sami@demo.test"] }],
+        shifts: [{ from: "10:00", to: "16:00", capacity: 2, people: ["sami@demo.test"] }],
       },
       {
         name: "Seventeen end-fed",
@@ -171,7 +175,7 @@ const days: DemoDay[] = [
         at: [25, 45],
         azimuthDeg: 45,
         tent: [20, 35],
-        shifts: [{ from: "2027-06-27T09:00", to: "2027-06-27T13:00", capacity: 2, people: ["tove@demo.test"] }],
+        shifts: [{ onDay: 1, from: "09:00", to: "13:00", capacity: 2, people: ["tove@demo.test"] }],
       },
       {
         name: "Six metres",
@@ -182,13 +186,13 @@ const days: DemoDay[] = [
         at: [190, 130],
         azimuthDeg: 90,
         tent: [195, 118],
-        shifts: [{ from: "2027-06-27T09:00", to: "2027-06-27T15:00", capacity: 2, people: [] }],
+        shifts: [{ onDay: 1, from: "09:00", to: "15:00", capacity: 2, people: [] }],
       },
     ],
   },
   {
     title: "Autumn antenna day",
-    date: "2026-10-03",
+    saturdayInWeeks: -9,
     from: "09:00",
     to: "16:00",
     status: "done",
@@ -261,8 +265,12 @@ async function homeSite(tx: Transaction): Promise<SiteRow> {
   return site;
 }
 
-/** "09:30" on the day's date, or a full "2027-06-26T10:00" wall-clock time, in club time. */
-const wallTime = (date: string, time: string) => (time.includes("T") ? time : `${date}T${time}`);
+/** The first day of a demo day: a Saturday counted from the seed's own date in club time. */
+function firstDateOf(demo: DemoDay, timeZone: string): Temporal.PlainDate {
+  const today = Temporal.Now.plainDateISO(timeZone);
+  const comingSaturday = today.add({ days: (6 - today.dayOfWeek + 7) % 7 || 7 });
+  return comingSaturday.add({ weeks: demo.saturdayInWeeks });
+}
 
 export async function seedAntennaDays(tx: Transaction, settings: { timeZone: string; ituRegion: number }): Promise<void> {
   const region = settings.ituRegion as ItuRegion;
@@ -270,13 +278,15 @@ export async function seedAntennaDays(tx: Transaction, settings: { timeZone: str
   const creator = await demoUserId(tx, "coordinator@demo.test");
   for (const demo of days) {
     if (await tx.query.antennaDays.findFirst({ where: eq(antennaDays.title, demo.title) })) continue;
+    const firstDate = firstDateOf(demo, settings.timeZone);
+    const atClubTime = (onDay: number, time: string) => wallTimeToInstant(`${firstDate.add({ days: onDay })}T${time}`, settings.timeZone);
     const [day] = await tx
       .insert(antennaDays)
       .values({
         title: demo.title,
         siteId: site.id,
-        startsAt: wallTimeToInstant(`${demo.date}T${demo.from}`, settings.timeZone),
-        endsAt: wallTimeToInstant(`${demo.endDate ?? demo.date}T${demo.to}`, settings.timeZone),
+        startsAt: atClubTime(0, demo.from),
+        endsAt: atClubTime((demo.lengthDays ?? 1) - 1, demo.to),
         meetingPoint: demo.meetingPoint,
         description: demo.description,
         safetyLeadId: await demoUserId(tx, demo.safetyLead),
@@ -312,8 +322,8 @@ export async function seedAntennaDays(tx: Transaction, settings: { timeZone: str
         })
         .returning();
       for (const demoShift of demoSlot.shifts) {
-        const startsAt = wallTimeToInstant(wallTime(demo.date, demoShift.from), settings.timeZone);
-        const endsAt = wallTimeToInstant(wallTime(demo.date, demoShift.to), settings.timeZone);
+        const startsAt = atClubTime(demoShift.onDay ?? 0, demoShift.from);
+        const endsAt = atClubTime(demoShift.onDay ?? 0, demoShift.to);
         const [shift] = await tx.insert(shifts).values({ slotId: slot.id, startsAt, endsAt, capacity: demoShift.capacity, taken: demoShift.people.length }).returning();
         for (const email of demoShift.people) {
           await tx.insert(shiftSignups).values({
