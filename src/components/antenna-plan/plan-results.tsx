@@ -3,26 +3,15 @@
 // What the engine computed for a plan: the summary figures, the cut sheet, the charts, the
 // end voltages, the RF-exposure distances, the matching device and the feedline, and the
 // cautions. The summary figures carry data-figure names for tests and readers alike.
-import type { ReactNode } from "react";
 import { Notice } from "@/components/ui/notice";
 import type { PlanBand, PlanResult } from "@/lib/antenna/plan";
 import { bandEdgePoints } from "@/lib/plan-screen/band-edges";
 import { CLOSING_CAUTION, PLAN_SCREEN_CAUTIONS } from "@/lib/plan-screen/cautions";
 import { formatCutLength, formatDistance, formatImpedance, formatMHz, formatSwr, type Units } from "@/lib/plan-screen/format";
+import { Figure } from "@/components/ui/figure";
 import { CurrentChart, ImpedanceChart, SwrChart, type MeasuredOverlay } from "./charts";
 import { CutSheetTable } from "./cut-sheet-table";
 import { tableClass } from "./table-class";
-
-function Figure({ name, label, children }: { name: string; label: string; children: ReactNode }) {
-  return (
-    <div className="rounded-lg border border-slate-200 p-3">
-      <dt className="text-sm text-slate-700">{label}</dt>
-      <dd className="text-lg font-bold tabular-nums text-slate-900" data-figure={name}>
-        {children}
-      </dd>
-    </div>
-  );
-}
 
 function bandwidthText(width: PlanBand["swrBandwidth"]["radio"]): string {
   if (!width) return "nowhere under 2:1";

@@ -2,24 +2,13 @@
 // the 2:1 bandwidth at the radio and the band fit; how the other end of the feedline was worked
 // out; and how much to cut or add on each piece, by the rule of thumb and by the engine. No
 // hooks, so it renders on the server. Figures carry data-figure names for tests and readers.
-import type { ReactNode } from "react";
 import { tableClass } from "@/components/antenna-plan/table-class";
 import { Notice } from "@/components/ui/notice";
 import type { PieceChange } from "@/lib/antenna/trim";
 import { formatCutLength, formatMHz, type Units } from "@/lib/plan-screen/format";
 import { ON_TARGET_PERCENT, type BandComparison } from "@/lib/sweeps/analysis";
 import type { SweepDetailDto } from "@/server/services/sweeps";
-
-function Figure({ name, label, children }: { name: string; label: string; children: ReactNode }) {
-  return (
-    <div className="rounded-lg border border-slate-200 p-3">
-      <dt className="text-sm text-slate-700">{label}</dt>
-      <dd className="text-lg font-bold tabular-nums text-slate-900" data-figure={name}>
-        {children}
-      </dd>
-    </div>
-  );
-}
+import { Figure } from "@/components/ui/figure";
 
 const signed = (value: number, digits: number) => `${value > 0 ? "+" : value < 0 ? "−" : ""}${Math.abs(value).toFixed(digits)}`;
 
