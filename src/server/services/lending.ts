@@ -288,21 +288,7 @@ export interface RequestResult {
 /** A member asks for an item for a time range (optionally for an antenna day's station slot). */
 export async function requestBooking(actor: Actor, input: BookingRequestInput, now = new Date()): Promise<RequestResult> {
   if (!can(actor, "loans.request")) throw forbidden();
-  const { timeZone } = await getClubSettings();
-  const wanted = await wantedInterval(input, timeZone, now);
-  return withOverlapGuard(
-    () =>
-      db().transaction(async (tx) => {
-        const item = await lockItem(tx, input.itemId);
-        const offered = await settleOffersOf(tx, item, now);
-        const { bookingId, outcome } = await createBooking(tx, { ...input, item, borrower: actor, wanted, recordedBy: actor, now, timeZone });
-        return { booking: await bookingDto(tx, bookingId), outcome, offered };
-      }),
-    async () => {
-      const item = await db().query.gearItems.findFirst({ where: eq(gearItems.id, input.itemId) });
-      return timeTakenError(db(), item!, wanted, { forUserId: actor.id, now, timeZone });
-    },
-  );
+  return bookItem(input, now, async () => ({ borrower: actor, recordedBy: actor }), actor.id);
 }
 
 /**
@@ -315,6 +301,24 @@ export async function bookForStation(
   now = new Date(),
 ): Promise<RequestResult> {
   if (!can(actor, "loans.manage")) throw forbidden();
+  return bookItem(input, now, async (tx) => ({
+    borrower: input.borrowerId ? await actorById(tx, input.borrowerId) : actor,
+    approvedBy: actor,
+    recordedBy: actor,
+  }));
+}
+
+/**
+ * Books an item in one transaction that holds the item's lock and settles its waitlist offers
+ * first. When the exclusion constraint refuses an overlap another request won, the answer names
+ * the next free time (counting the person's own offers when `forUserId` is given).
+ */
+async function bookItem(
+  input: BookingRequestInput & { slotFeedline?: boolean },
+  now: Date,
+  partiesOf: (tx: Transaction) => Promise<Pick<NewBooking, "borrower" | "approvedBy" | "recordedBy">>,
+  forUserId?: string,
+): Promise<RequestResult> {
   const { timeZone } = await getClubSettings();
   const wanted = await wantedInterval(input, timeZone, now);
   return withOverlapGuard(
@@ -322,13 +326,12 @@ export async function bookForStation(
       db().transaction(async (tx) => {
         const item = await lockItem(tx, input.itemId);
         const offered = await settleOffersOf(tx, item, now);
-        const borrower = input.borrowerId ? await actorById(tx, input.borrowerId) : actor;
-        const { bookingId, outcome } = await createBooking(tx, { ...input, item, borrower, wanted, approvedBy: actor, recordedBy: actor, now, timeZone });
+        const { bookingId, outcome } = await createBooking(tx, { ...input, item, ...(await partiesOf(tx)), wanted, now, timeZone });
         return { booking: await bookingDto(tx, bookingId), outcome, offered };
       }),
     async () => {
       const item = await db().query.gearItems.findFirst({ where: eq(gearItems.id, input.itemId) });
-      return timeTakenError(db(), item!, wanted, { now, timeZone });
+      return timeTakenError(db(), item!, wanted, { forUserId, now, timeZone });
     },
   );
 }
