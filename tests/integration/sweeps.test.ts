@@ -12,10 +12,10 @@ import { bookForStation } from "@/server/services/lending";
 import { saveLibraryPlan } from "@/server/services/plans";
 import { createShift, signUp } from "@/server/services/shifts";
 import { createSite } from "@/server/services/sites";
-import { createSlot, deleteSlot, getSlotWithContext, saveSlotPlan } from "@/server/services/station-slots";
+import { createSlot, deleteSlot, getSlotWithContext, getSlotWithFeedline, saveSlotPlan } from "@/server/services/station-slots";
 import { deleteSweep, getSweep, listSweeps, planOffsets, sweepFile, uploadSweep, type SweepTarget } from "@/server/services/sweeps";
 import { sweepUploadFieldsSchema } from "@/validations/sweeps";
-import { addAnalyser } from "./gear-helpers";
+import { addAnalyser, addCoaxRun } from "./gear-helpers";
 import { createPerson, publicErrorOf } from "./helpers";
 
 /** A published day in 2031 with one 20 m dipole slot and a shift. */
@@ -167,6 +167,23 @@ describe("uploading a sweep", () => {
     if (!outcome.ok) throw new Error(JSON.stringify(outcome.problems));
     expect(outcome.sweep.analysis.bands[0].shiftPercent).toBeCloseTo(-2, 1);
     expect(outcome.sweep.analysis.explanation.join(" ")).toMatch(/inverting the lossy-line formula/);
+  });
+
+  it("de-embeds through the coax run booked as the slot's feedline, not the slot's planned run", async () => {
+    const { coordinator, day, slot } = await dayWithSlot();
+    // Source: Guyline issue 7, item 3 (de-embed "using the slot's actual coax run") and issue 5, item 4 (a booked
+    // coax run is the slot's feedline). 60 m of RG-58 instead of the planned RG-213: the wrong line would show.
+    const run = await addCoaxRun({ cableType: "rg58", lengthM: 60 });
+    await bookForStation(coordinator, { itemId: run.id, startsAt: "2031-06-14T09:00", endsAt: "2031-06-14T17:00", antennaDayId: day.id, stationSlotId: slot.id, slotFeedline: true });
+    const { planRequest } = await getSlotWithFeedline(coordinator, slot.id);
+    expect(planRequest.feedline).toEqual({ type: "rg58", lengthM: 60 });
+    const [band] = plan(planRequest).bands;
+    // The prediction at the radio end of the booked run, 2 % low, as the analyser there would read it.
+    const csv = ["Frequency (MHz),R,X", ...band.sweep.map((point) => `${(point.mhz * 0.98).toFixed(5)},${point.radio.r.toFixed(2)},${point.radio.x.toFixed(2)}`)].join("\n");
+    const outcome = await uploadSweep(coordinator, { kind: "slot", id: slot.id }, { fileName: "radio.csv", bytes: bytes(csv), fields: fields({ place: "radio-end" }) });
+    if (!outcome.ok) throw new Error(JSON.stringify(outcome.problems));
+    expect(outcome.sweep.planRequest.feedline).toEqual({ type: "rg58", lengthM: 60 });
+    expect(outcome.sweep.analysis.bands[0].shiftPercent).toBeCloseTo(-2, 1);
   });
 });
 
