@@ -47,7 +47,6 @@ export const cableTypeIds = FEEDLINE_TYPES.map((type) => type.id) as [FeedlineTy
 export const cableTypeLabels = Object.fromEntries(FEEDLINE_TYPES.map((type) => [type.id, type.label])) as Record<FeedlineTypeId, string>;
 
 export const transformerStyles = ["balun", "unun"] as const;
-export type TransformerStyle = (typeof transformerStyles)[number];
 export const transformerRatios = Object.keys(TRANSFORMERS) as [TransformerId, ...TransformerId[]];
 
 /**

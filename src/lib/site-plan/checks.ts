@@ -4,11 +4,11 @@
  * findings out, so the plan can show them as a coordinator drags a slot.
  * Screening only; local codes, permits and licensed practice prevail.
  */
+import { wavelengthMetres } from "@/lib/antenna/physics";
 import { pointToShapeDistance, segmentToSegmentDistance, shapeDistance } from "./geometry";
 import { hazardShape, isPublicHazard, type Hazard } from "./hazards";
 import type { Footprint } from "./footprint";
 
-const SPEED_OF_LIGHT = 299_792_458;
 
 export interface BandRange {
   name: string;
@@ -133,7 +133,7 @@ export function bandFindings(a: StationForChecks, b: StationForChecks): Finding[
  */
 export function requiredSeparationM(a: readonly BandRange[], b: readonly BandRange[]): number {
   const lowestMHz = Math.min(...a.map((band) => band.lowMHz), ...b.map((band) => band.lowMHz));
-  return SPEED_OF_LIGHT / (lowestMHz * 1e6);
+  return wavelengthMetres(lowestMHz);
 }
 
 /** The shortest distance between any conductor of one antenna and any of the other. */

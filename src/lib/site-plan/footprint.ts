@@ -103,6 +103,3 @@ export function footprint(summary: AntennaSummary, placement: Placement): Footpr
     conductors: [{ from: position, to: position }, ...wires],
   };
 }
-
-/** Straight-line distance from the slot to its operating tent (ground run of the feedline). */
-export const tentDistanceM = (slot: Point, tent: Point): number => distance(slot, tent);

@@ -103,11 +103,6 @@ export function segmentsFor(
   return Math.max(1, Math.ceil((lengthM * segmentation.segmentsPerWavelength) / wavelengthMetres(segmentation.maxMHz)));
 }
 
-/** Lowest z of all wire ends: straight wires reach their lowest point at an end. */
-export function lowestPoint(structure: Structure): number {
-  return Math.min(...structure.wires.flatMap((w) => [w.from[2], w.to[2]]));
-}
-
 /** A height problem when ground matters and the lowest point is too low. */
 export function clearanceProblems(site: Site, lowestZ: number, path: string, advice: string): string[] {
   if (site.ground.kind === "free" || lowestZ >= MIN_CLEARANCE_M) return [];
