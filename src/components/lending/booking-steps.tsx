@@ -6,7 +6,7 @@ import { useState, useTransition, type FormEvent } from "react";
 import { bookingStepAction } from "@/app/(club)/lending/actions";
 import { Button } from "@/components/ui/button";
 import { gearConditionLabels, shelfConditions, type ShelfCondition } from "@/lib/gear/kinds";
-import type { BookingAction } from "@/lib/lending/states";
+import { bookingActionLabels, type BookingAction } from "@/lib/lending/states";
 import type { BookingStepInput } from "@/validations/lending";
 
 interface StepBooking {
@@ -40,7 +40,7 @@ export function BookingSteps({ booking, steps, isBorrower, currentCondition }: {
   const label = (step: BookingAction) => {
     if (step === "return") return isBorrower ? "Return it" : "Take back";
     if (step === "cancel") return "Cancel booking";
-    return { approve: "Approve", decline: "Decline", "hand-out": "Hand out", "co-sign": "Co-sign", "mark-lost": "Mark lost" }[step];
+    return bookingActionLabels[step];
   };
 
   if (steps.length === 0) return null;

@@ -25,7 +25,7 @@ import { tellBookingApproved, tellBookingStep, tellOffers } from "@/server/servi
 import { gearKindLabels } from "@/lib/gear/kinds";
 import { isDueSoon, isFree, isOverdue, nextFreeStart, offerExpiry, pickOffers, rangeProblem, type Interval } from "@/lib/lending/availability";
 import { HAND_OUT_LEAD_HOURS } from "@/lib/lending/next-action";
-import { allowedActions, releasesTime, transition, type BookingState } from "@/lib/lending/states";
+import { allowedActions, openStates, releasesTime, transition, type BookingState } from "@/lib/lending/states";
 import { timeInputToInstant } from "@/lib/lending/time-input";
 import { formatInZone, formatRangeInZone } from "@/lib/time";
 import type { BookingListQuery, BookingRequestInput, BookingStepInput } from "@/validations/lending";
@@ -826,7 +826,7 @@ export async function lendingDesk(actor: Actor, now = new Date()): Promise<Lendi
   await settleLapsedOffers(now);
   const keeper = can(actor, "loans.manage");
   const mentor = canCoSignLoan(actor, "");
-  const open = inArray(gearBookings.state, ["requested", "approved", "out", "lost"]);
+  const open = inArray(gearBookings.state, [...openStates]);
   const handOutBy = new Date(now.getTime() + HAND_OUT_LEAD_HOURS * 3_600_000);
   const [mine, myWaitlist, toApprove, toHandOut, out, toCoSign] = await Promise.all([
     selectBookings(db())
