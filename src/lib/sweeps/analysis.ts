@@ -64,12 +64,9 @@ const withSwr = (points: ViewPoint[]) => points.filter((point): point is ViewPoi
 /** The SWR dip, when its lowest point lies inside the sweep (at an end, the dip is beyond it). */
 function interiorDip(points: { mhz: number; swr: number }[]): { mhz: number; swr: number } | null {
   if (points.length < 3) return null;
-  let lowest = 0;
-  points.forEach((point, index) => {
-    if (point.swr < points[lowest].swr) lowest = index;
-  });
-  if (lowest === 0 || lowest === points.length - 1) return null;
-  return swrMinimum(points);
+  // swrMinimum hands back the end point itself when the lowest reading is at an end.
+  const dip = swrMinimum(points);
+  return dip === points[0] || dip === points[points.length - 1] ? null : dip;
 }
 
 function bandFit(radio: { mhz: number; swr: number }[], low: number, high: number): BandFit {
@@ -178,7 +175,8 @@ export function trimRequestOf(
     }
     measuredMHz.push(found);
   }
-  return { ok: true, input: { plan: request, measuredMHz, ...(builtLengthsM ? { builtLengthsM } : {}) } };
+  // Built to plan means the plan's own cut lengths: the engine need not search for them again.
+  return { ok: true, input: { plan: request, measuredMHz, builtLengthsM: builtLengthsM ?? plan.elements.map((element) => element.lengthM) } };
 }
 
 /**
