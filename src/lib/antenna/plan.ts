@@ -22,6 +22,7 @@ import { EngineInputError, parseOrThrow, problem } from "./problems";
 import { tuneLengths } from "./resonance";
 import { solveAt, solveSweep, type PreparedStructure, type Solution } from "./solver";
 import { MAX_KA, type Structure, type Vec3 } from "./structure";
+import { CLOSING_CAUTION, SAFETY_CAUTIONS } from "./cautions";
 
 /** Sweep intervals per band: 41 points, band edges and centre among them. */
 export const SWEEP_INTERVALS = 40;
@@ -295,11 +296,7 @@ function bandResult(
   };
 }
 
-const STANDING_CAUTIONS = [
-  "Never put up a mast or wire where it could fall onto, or touch, a power line: keep at least the mast height plus the longest wire away, and more where you can.",
-  "Raise masts with a crew of two or more, never in wind or with lightning about, and stay out of the fall zone.",
-  "Local codes and licensed practice prevail.",
-];
+const STANDING_CAUTIONS = [SAFETY_CAUTIONS.powerLines, SAFETY_CAUTIONS.fallZone, CLOSING_CAUTION];
 
 function planCautions(request: PlanRequest, model: FamilyModel, converged: boolean, line: FeedlineType): string[] {
   const cautions = [...STANDING_CAUTIONS, ...model.notes];

@@ -1,6 +1,7 @@
 // The safety notes of a build session: shown on the session page and in the messages that
 // give someone a place. Cautions of the trade (common practice); local codes, the site's rules
 // and licensed practice prevail over them.
+import { FALL_ZONE_MIN_MARGIN_M } from "@/lib/site-plan/footprint";
 
 export interface SafetySection {
   title: string;
@@ -40,7 +41,7 @@ export function buildSessionSafety(options: { raisesMast: boolean }): SafetySect
     sections.push({
       title: "Raising a mast: working at height",
       items: [
-        "Masts near power lines kill: put the mast where nothing can reach an overhead line if it falls or a wire slips, at least the mast's height plus 3 m away and preferably 1.5 times its height.",
+        `Masts near power lines kill: put the mast where nothing can reach an overhead line if it falls or a wire slips, farther than the mast's height plus the longest wire, and never less than its height plus ${FALL_ZONE_MIN_MARGIN_M} m.`,
         "Raise it with a crew of at least two, a tag line and hard hats, and stay out of the fall zone while it goes up.",
         "Never raise a mast in strong wind or when thunder is about; flag the guy lines at head height.",
       ],

@@ -1,26 +1,8 @@
-/**
- * The cautions the plan screen and the station sheet show (product.md, "Cautions the
- * product shows"). Common practice throughout: they name the usual precautions and defer to
- * local codes and licensed practice, which always come last.
- */
-import { END_VOLTAGE_CAUTION } from "@/lib/antenna/end-voltage";
+// The cautions the plan screen and the station sheet show. Their words live with the engine,
+// which puts them in every plan; this module adds the plan screen's own order.
+import { SAFETY_CAUTIONS } from "@/lib/antenna/cautions";
 
-export const CLOSING_CAUTION = "Local codes and licensed practice prevail.";
-
-export const SAFETY_CAUTIONS = {
-  powerLines:
-    "Masts near power lines kill. Keep every mast and wire well clear of overhead lines, farther than the mast height plus the longest wire in any direction it could fall, sag or blow; if in doubt, choose another spot.",
-  fallZone: "Nobody stands in a mast's fall zone while it goes up, comes down or takes load; keep paths and tents out of it.",
-  exposure:
-    "Keep people outside the RF-exposure distances while transmitting. They are screening figures from the published limits, not measurements, and local rules prevail.",
-  endVoltage: END_VOLTAGE_CAUTION,
-  guying:
-    "Guy every mast at three or more points at its guy radius; check stakes, knots and tension before raising and after gusts, and flag the guy lines so nobody walks into them.",
-  generators:
-    "Run generators in the open, away from tents and downwind; refuel only when they are stopped and cool, and keep fuel away from the operating position.",
-  lightning:
-    "At the first thunder stop operating, disconnect the feedlines outside the tent, lower masts if that is safe, and get everyone to shelter away from masts and wires.",
-} as const;
+export { CLOSING_CAUTION, SAFETY_CAUTIONS } from "@/lib/antenna/cautions";
 
 /** The plan screen's safety block: the hazards of one antenna, then the closing line. */
 export const PLAN_SCREEN_CAUTIONS = [SAFETY_CAUTIONS.powerLines, SAFETY_CAUTIONS.exposure, SAFETY_CAUTIONS.endVoltage];
