@@ -2,6 +2,7 @@
 // (400 with the list of problems), the handler, and typed errors turned into safe answers.
 import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
+import { formatPath } from "@/lib/antenna/problems";
 import { PublicError } from "@/server/errors";
 import type { Actor } from "@/server/policy";
 import { getViewer } from "@/server/session";
@@ -12,12 +13,7 @@ export interface Problem {
 }
 
 export function zodProblems(error: z.ZodError): Problem[] {
-  return error.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
-}
-
-/** `wires[1].diameterMm` style paths, as the engine contract writes them. */
-export function formatPath(path: readonly PropertyKey[]): string {
-  return path.reduce<string>((text, key) => (typeof key === "number" ? `${text}[${key}]` : text ? `${text}.${String(key)}` : String(key)), "");
+  return error.issues.map((issue) => ({ path: formatPath(issue.path, ""), message: issue.message }));
 }
 
 export const badRequest = (problems: Problem[]) =>

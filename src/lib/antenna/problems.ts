@@ -16,14 +16,14 @@ export class EngineInputError extends Error {
   }
 }
 
-/** A path such as ["wires", 1, "diameterMm"] written as `wires[1].diameterMm`; the root is `request`. */
-export function formatPath(path: readonly PropertyKey[]): string {
+/** A path such as ["wires", 1, "diameterMm"] written as `wires[1].diameterMm`; the empty path is `root`. */
+export function formatPath(path: readonly PropertyKey[], root = "request"): string {
   let text = "";
   for (const key of path) {
     if (typeof key === "number") text += `[${key}]`;
     else text += text === "" ? String(key) : `.${String(key)}`;
   }
-  return text === "" ? "request" : text;
+  return text === "" ? root : text;
 }
 
 /** One problem line from a path and a message. */

@@ -4,7 +4,7 @@
 // antenna (outline, exposure distance, fall zone) is kept on the slot for the site plan.
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
-import { EngineInputError } from "@/lib/antenna/problems";
+import { EngineInputError, formatPath } from "@/lib/antenna/problems";
 import { planRequestSchema, type PlanRequest, type PlanRequestInput } from "@/lib/antenna/plan-schema";
 import { antennaSummaryOf } from "@/lib/antenna-days/antenna-outline";
 import { feedlineRun, planRequestForSlot, slotFieldOfPlanPath, slotPlanParamsOf, type FeedlineRun, type SlotMode, type SlotPlanParams, type SlotPlanParamsInput } from "@/lib/antenna-days/slot-plan";
@@ -13,7 +13,6 @@ import type { AntennaSummary } from "@/lib/site-plan/footprint";
 import type { BookedFeedline } from "@/lib/station-kits/booked-feedline";
 import { withFeedline } from "@/lib/station-kits/run-figures";
 import type { BandRange } from "@/lib/site-plan/checks";
-import { formatPath } from "@/server/api";
 import { db, type Executor } from "@/server/db";
 import { gearBookings, gearItems, shifts, sites, stationSlots, type AntennaDayRow, type SiteRow, type StationSlotRow } from "@/server/db/schema";
 import { runPlan } from "@/server/engine/run";
@@ -102,7 +101,7 @@ function validatePlan(fields: SlotFields, site: SiteRow, region: ItuRegion): { r
   const parsed = planRequestSchema.safeParse(input);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
-    throw planProblem(formatPath(issue.path), issue.message);
+    throw planProblem(formatPath(issue.path, ""), issue.message);
   }
   return { request: parsed.data, planParams: slotPlanParamsOf(parsed.data) };
 }
