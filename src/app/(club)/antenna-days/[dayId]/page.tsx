@@ -9,7 +9,7 @@ import { Card, EmptyState, Notice, PageHeader } from "@/components/ui/notice";
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
 import { MODE_DUTY } from "@/lib/antenna/exposure";
 import { isEditable } from "@/lib/antenna-days/status";
-import type { Units } from "@/lib/plan-screen/format";
+import { formatDistance, type Units } from "@/lib/plan-screen/format";
 import { bookedFeedlineText, type BookedFeedline } from "@/lib/station-kits/booked-feedline";
 import { formatRangeInZone } from "@/lib/time";
 import { loadOrNotFound } from "@/server/page-data";
@@ -23,10 +23,9 @@ import { requirePageViewer } from "@/server/session";
 
 export const metadata: Metadata = { title: "Antenna day" };
 
-const m = (value: number) => `${value.toFixed(1)} m`;
-
 function SlotFacts({ slot, feedline, units }: { slot: SlotDto; feedline: BookedFeedline | undefined; units: Units }) {
   const run = slot.feedlineRun;
+  const m = (metres: number) => formatDistance(metres, units);
   const facts: [string, string][] = [
     ["Bands", slot.bands.join(", ")],
     ["Power and mode", `${slot.powerW} W, ${MODE_DUTY[slot.mode].label}`],
