@@ -3,6 +3,7 @@
 // What the engine computed for a plan: the summary figures, the cut sheet, the charts, the
 // end voltages, the RF-exposure distances, the matching device and the feedline, and the
 // cautions. The summary figures carry data-figure names for tests and readers alike.
+import { memo } from "react";
 import { Notice } from "@/components/ui/notice";
 import type { PlanBand, PlanResult } from "@/lib/antenna/plan";
 import { bandEdgePoints } from "@/lib/plan-screen/band-edges";
@@ -120,7 +121,12 @@ function BandResults({ band, result, units, measured }: { band: PlanBand; result
   );
 }
 
-export function PlanResults({ result, units, measured }: { result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
+/**
+ * Memoised: the plan screen re-renders on every keystroke in its form, but the results (and
+ * their charts) only change when the engine answers with a new result. Its props are the
+ * worker's result object, the units string and the page's measured overlay: all stable.
+ */
+export const PlanResults = memo(function PlanResults({ result, units, measured }: { result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
   const cautions = [...new Set([...PLAN_SCREEN_CAUTIONS, ...result.cautions])].filter((caution) => caution !== CLOSING_CAUTION);
   return (
     <div>
@@ -201,4 +207,4 @@ export function PlanResults({ result, units, measured }: { result: PlanResult; u
       </details>
     </div>
   );
-}
+});
