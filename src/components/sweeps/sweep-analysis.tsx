@@ -5,6 +5,7 @@
 import { tableClass } from "@/components/antenna-plan/table-class";
 import { Notice } from "@/components/ui/notice";
 import type { PieceChange } from "@/lib/antenna/trim";
+import { CLOSING_CAUTION, TRIM_CAUTIONS } from "@/lib/plan-screen/cautions";
 import { formatCutLength, formatMHz, type Units } from "@/lib/plan-screen/format";
 import { ON_TARGET_PERCENT, type BandComparison } from "@/lib/sweeps/analysis";
 import type { SweepDetailDto } from "@/server/services/sweeps";
@@ -164,10 +165,11 @@ export function SweepAnalysis({ sweep, units, planChanged }: { sweep: SweepDetai
       )}
       <Notice tone="caution" title="Before you cut">
         <ul className="list-disc pl-5">
-          <li>Switch the transmitter off and lower the antenna before touching the wire: its ends carry high RF voltage on the air.</li>
-          <li>Lower and raise masts with a crew of two or more, never in wind or with lightning about, and stay out of the fall zone.</li>
-          <li>Local codes and licensed practice prevail.</li>
+          {TRIM_CAUTIONS.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
         </ul>
+        <p className="mt-2 font-bold">{CLOSING_CAUTION}</p>
       </Notice>
     </div>
   );
