@@ -178,7 +178,7 @@ export default async function AntennaDayPage({ params }: { params: Promise<{ day
             </div>
             <SlotFacts slot={slot} feedline={feedlines.get(slot.id)} units={member.units} />
             <h4 className="mt-4 mb-1 font-bold">Shifts</h4>
-            <ShiftList slotName={slot.name} shifts={shiftsBySlot[slot.id] ?? []} manage={manage} />
+            <ShiftList slotName={slot.name} shifts={shiftsBySlot[slot.id] ?? []} manage={manage} timeZone={day.timeZone} />
             {manage && <AddShiftForm slotId={slot.id} slotName={slot.name} defaults={{ startsAtLocal: day.startsAtLocal, endsAtLocal: day.endsAtLocal }} />}
           </section>
         ))}
