@@ -9,6 +9,8 @@ const HOME_SITE = "Wrenmoor Common, north field";
 /** A date 7 to 27 days ahead (the calendar needs at most one step forward), as yyyy-mm-dd. */
 const daysAhead = 7 + Math.floor(Math.random() * 21);
 const date = new Date(Date.now() + daysAhead * 86_400_000).toISOString().slice(0, 10);
+/** That date as the shift labels write it (formatRangeInZone, en-GB): "Sat, 13 Jun 2026". */
+const shiftDate = new Intl.DateTimeFormat("en-GB", { weekday: "short", day: "numeric", month: "short", year: "numeric", timeZone: "UTC" }).format(new Date(`${date}T12:00:00Z`));
 const title = `Journey day ${Date.now() % 100_000}`;
 
 async function addSlot(page: Page, slot: { name: string; band: string; family: string; x: number; y: number; bearing: number; tent: [number, number] }) {
@@ -120,7 +122,7 @@ test("a coordinator plans, checks and publishes an antenna day; a member finds i
   await expect(memberPage.getByRole("link", { name: "Add a station slot" })).toHaveCount(0);
 
   const slot = memberPage.getByRole("region", { name: "Station slot Journey twenty" });
-  await slot.getByRole("button", { name: `Sign up for Journey twenty ${date} 10:00–13:00` }).click();
+  await slot.getByRole("button", { name: `Sign up for Journey twenty ${shiftDate}, 10:00–13:00` }).click();
   await expect(slot.getByText("You are signed up for this shift.")).toBeVisible();
   await expect(slot.getByText("1 of 2 places taken: Cleo Marchetti-Vane (Q9CLV)")).toBeVisible();
   await expect(slot.getByRole("link", { name: "Antenna plan of Journey twenty" })).toBeVisible();

@@ -7,20 +7,13 @@ import { useActionForm } from "@/components/forms/use-action-form";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { formatRangeInZone } from "@/lib/time";
 import type { ActionResult } from "@/server/action";
 import type { ShiftDto } from "@/server/services/shifts";
 import { shiftFormSchema } from "@/validations/antenna-days";
 
-const timeOf = (local: string) => local.slice(11, 16);
-const dateOf = (local: string) => local.slice(0, 10);
-
-function shiftLabel(shift: ShiftDto): string {
-  const sameDay = dateOf(shift.startsAtLocal) === dateOf(shift.endsAtLocal);
-  return sameDay ? `${dateOf(shift.startsAtLocal)} ${timeOf(shift.startsAtLocal)}–${timeOf(shift.endsAtLocal)}` : `${shift.startsAtLocal.replace("T", " ")} – ${shift.endsAtLocal.replace("T", " ")}`;
-}
-
 /** A slot's shifts: who operates when, sign-up and cancel for members, delete for coordinators. */
-export function ShiftList({ slotName, shifts, manage }: { slotName: string; shifts: ShiftDto[]; manage: boolean }) {
+export function ShiftList({ slotName, shifts, manage, timeZone }: { slotName: string; shifts: ShiftDto[]; manage: boolean; timeZone: string }) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
@@ -37,7 +30,7 @@ export function ShiftList({ slotName, shifts, manage }: { slotName: string; shif
       {message && <Notice tone={message.ok ? "success" : "danger"}>{message.text}</Notice>}
       <ul className="divide-y divide-slate-200" aria-label={`Shifts of ${slotName}`}>
         {shifts.map((shift) => {
-          const label = shiftLabel(shift);
+          const label = formatRangeInZone(shift.startsAt, shift.endsAt, timeZone);
           return (
             <li key={shift.id} className="flex flex-wrap items-center gap-x-4 gap-y-2 py-2">
               <div className="min-w-52 flex-1">

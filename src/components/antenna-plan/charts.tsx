@@ -208,9 +208,9 @@ export function CurrentChart({ currents, band, units }: { currents: WireCurrent[
       <ResponsiveContainer width="100%" height="100%">
         <LineChart margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
           <CartesianGrid stroke="#cbd5e1" strokeDasharray="2 4" />
-          <XAxis dataKey="distanceM" type="number" domain={[0, "dataMax"]} unit=" m" fontSize={12} tickFormatter={(m: number) => m.toFixed(1)} />
+          <XAxis dataKey="distanceM" type="number" domain={[0, "dataMax"]} fontSize={12} tickFormatter={(m: number) => formatDistance(m, units)} />
           <YAxis fontSize={12} width={48} unit=" A" />
-          <Tooltip formatter={(value) => `${Number(value).toFixed(3)} A`} labelFormatter={(m) => `${Number(m).toFixed(2)} m from the start`} />
+          <Tooltip formatter={(value) => `${Number(value).toFixed(3)} A`} labelFormatter={(m) => `${formatDistance(Number(m), units)} from the start`} />
           <Legend />
           {currents.map((wire, index) => {
             const stroke = STROKES[index % STROKES.length];

@@ -3,21 +3,16 @@
 // What the engine computed for a plan: the summary figures, the cut sheet, the charts, the
 // end voltages, the RF-exposure distances, the matching device and the feedline, and the
 // cautions. The summary figures carry data-figure names for tests and readers alike.
+import { memo } from "react";
 import { Notice } from "@/components/ui/notice";
 import type { PlanBand, PlanResult } from "@/lib/antenna/plan";
 import { bandEdgePoints } from "@/lib/plan-screen/band-edges";
 import { CLOSING_CAUTION, PLAN_SCREEN_CAUTIONS } from "@/lib/plan-screen/cautions";
-import { formatCutLength, formatDistance, formatImpedance, formatMHz, formatSwr, type Units } from "@/lib/plan-screen/format";
+import { formatBandwidth, formatCutLength, formatDistance, formatImpedance, formatMHz, formatSigned, formatSwr, type Units } from "@/lib/plan-screen/format";
 import { Figure } from "@/components/ui/figure";
 import { CurrentChart, ImpedanceChart, SwrChart, type MeasuredOverlay } from "./charts";
 import { CutSheetTable } from "./cut-sheet-table";
 import { tableClass } from "./table-class";
-
-function bandwidthText(width: PlanBand["swrBandwidth"]["radio"]): string {
-  if (!width) return "nowhere under 2:1";
-  const atLeast = width.lowOpen || width.highOpen ? "at least " : "";
-  return `${atLeast}${Math.round(width.widthKHz)} kHz (${width.lowMHz.toFixed(3)}–${width.highMHz.toFixed(3)} MHz)`;
-}
 
 function BandResults({ band, result, units, measured }: { band: PlanBand; result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
   const edges = bandEdgePoints(band);
@@ -44,7 +39,7 @@ function BandResults({ band, result, units, measured }: { band: PlanBand; result
           {formatSwr(edges.low.radio.swr)} / {formatSwr(edges.high.radio.swr)}
         </Figure>
         <Figure name="bandwidth-radio" label="2:1 bandwidth at the radio">
-          {bandwidthText(band.swrBandwidth.radio)}
+          {formatBandwidth(band.swrBandwidth.radio)}
         </Figure>
         <Figure name="loss" label="Feedline loss at the centre, matched / total">
           {band.loss.matchedDb.toFixed(2)} dB / {band.loss.totalDb.toFixed(2)} dB
@@ -120,7 +115,12 @@ function BandResults({ band, result, units, measured }: { band: PlanBand; result
   );
 }
 
-export function PlanResults({ result, units, measured }: { result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
+/**
+ * Memoised: the plan screen re-renders on every keystroke in its form, but the results (and
+ * their charts) only change when the engine answers with a new result. Its props are the
+ * worker's result object, the units string and the page's measured overlay: all stable.
+ */
+export const PlanResults = memo(function PlanResults({ result, units, measured }: { result: PlanResult; units: Units; measured?: MeasuredOverlay }) {
   const cautions = [...new Set([...PLAN_SCREEN_CAUTIONS, ...result.cautions])].filter((caution) => caution !== CLOSING_CAUTION);
   return (
     <div>
@@ -148,8 +148,7 @@ export function PlanResults({ result, units, measured }: { result: PlanResult; u
                 {formatCutLength(element.ruleOfThumb.lengthM, units)} <span className="text-sm text-slate-600">({element.ruleOfThumb.rule})</span>
               </td>
               <td>
-                {element.differenceFromRulePercent > 0 ? "+" : ""}
-                {element.differenceFromRulePercent.toFixed(1)} %
+                {formatSigned(element.differenceFromRulePercent, 1)} %
               </td>
             </tr>
           ))}
@@ -201,4 +200,4 @@ export function PlanResults({ result, units, measured }: { result: PlanResult; u
       </details>
     </div>
   );
-}
+});

@@ -2,13 +2,26 @@
 // The gear shelf: a server-side table over /api/gear, sorted, filtered and paged by the server.
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
 import { gearConditionLabels, gearConditions, gearKindLabels, gearKinds, type GearCondition, type GearKind } from "@/lib/gear/kinds";
 import { formatInZone } from "@/lib/time";
 import type { GearListRow } from "@/server/services/gear";
 import { ConditionBadge } from "./badges";
 import { detailSummary } from "./describe";
+
+/** The search asks the server once typing pauses, not on every keystroke. */
+const SEARCH_DELAY_MS = 300;
+
+/** The value once it has stayed the same for `delayMs`. */
+function useSettledValue<T>(value: T, delayMs: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const timer = setTimeout(() => setSettled(value), delayMs);
+    return () => clearTimeout(timer);
+  }, [value, delayMs]);
+  return settled;
+}
 
 const helper = createColumnHelper<typeof serverTableFeatures, GearListRow>();
 
@@ -51,6 +64,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
   const columns = useMemo(() => buildColumns(timeZone), [timeZone]);
   const [availableOn, setAvailableOn] = useState("");
   const [search, setSearch] = useState("");
+  const query = useSettledValue(search.trim(), SEARCH_DELAY_MS);
   const [includeRetired, setIncludeRetired] = useState(false);
   const { table, result, pagination, filterValue, setFilter, firstPage, csvHref } = useServerTable({
     queryKey: "gear",
@@ -58,7 +72,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
     columns,
     initialSort: { id: "labelCode", desc: false },
     filterParams: { kind: "kind", condition: "condition" },
-    extraParams: { availableOn, q: search.trim(), includeRetired },
+    extraParams: { availableOn, q: query, includeRetired },
     noun: "The shelf",
   });
 
@@ -113,7 +127,15 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
           />
         </label>
         <label className="flex min-h-11 items-center gap-2 self-end font-bold">
-          <input type="checkbox" className="size-5 accent-copper-700" checked={includeRetired} onChange={(event) => setIncludeRetired(event.target.checked)} />
+          <input
+            type="checkbox"
+            className="size-5 accent-copper-700"
+            checked={includeRetired}
+            onChange={(event) => {
+              setIncludeRetired(event.target.checked);
+              firstPage();
+            }}
+          />
           Show retired items
         </label>
       </div>

@@ -3,11 +3,11 @@
 import Link from "next/link";
 import { tableClass } from "@/components/antenna-plan/table-class";
 import { EmptyState } from "@/components/ui/notice";
-import { formatCutLength, type Units } from "@/lib/plan-screen/format";
+import { formatCutLength, formatSigned, type Units } from "@/lib/plan-screen/format";
 import { formatInZone } from "@/lib/time";
 import type { PlanOffsets } from "@/server/services/sweeps";
 
-const percent = (value: number) => `${value > 0 ? "+" : value < 0 ? "−" : ""}${Math.abs(value).toFixed(2)} %`;
+const percent = (value: number) => `${formatSigned(value, 2)} %`;
 
 export function PlanOffsetsCard({ offsets, planId, units, timeZone }: { offsets: PlanOffsets; planId: string; units: Units; timeZone: string }) {
   if (offsets.entries.length === 0) {

@@ -5,16 +5,15 @@
 import { tableClass } from "@/components/antenna-plan/table-class";
 import { Notice } from "@/components/ui/notice";
 import type { PieceChange } from "@/lib/antenna/trim";
-import { formatCutLength, formatMHz, type Units } from "@/lib/plan-screen/format";
+import { CLOSING_CAUTION, TRIM_CAUTIONS } from "@/lib/plan-screen/cautions";
+import { formatBandwidth, formatCutLength, formatMHz, formatSigned, type Units } from "@/lib/plan-screen/format";
 import { ON_TARGET_PERCENT, type BandComparison } from "@/lib/sweeps/analysis";
 import type { SweepDetailDto } from "@/server/services/sweeps";
 import { Figure } from "@/components/ui/figure";
 
-const signed = (value: number, digits: number) => `${value > 0 ? "+" : value < 0 ? "−" : ""}${Math.abs(value).toFixed(digits)}`;
-
 export function shiftText(band: { shiftKHz: number | null; shiftPercent: number | null }): string {
   if (band.shiftKHz === null || band.shiftPercent === null) return "not found";
-  return `${signed(band.shiftKHz, 0)} kHz (${signed(band.shiftPercent, 2)} %)`;
+  return `${formatSigned(band.shiftKHz, 0)} kHz (${formatSigned(band.shiftPercent, 2)} %)`;
 }
 
 export const verdictText: Record<BandComparison["verdict"], string> = {
@@ -30,12 +29,6 @@ const fitText: Record<BandComparison["bandFits"], string> = {
   "not-covered": "Not known: the sweep does not cover the whole band",
   unknown: "Not known: the SWR at the radio cannot be worked out from this sweep",
 };
-
-function bandwidthText(band: BandComparison): string {
-  if (!band.bandwidth) return "nowhere under 2:1";
-  const open = band.bandwidth.lowOpen || band.bandwidth.highOpen ? "at least " : "";
-  return `${open}${Math.round(band.bandwidth.widthKHz)} kHz (${band.bandwidth.lowMHz.toFixed(3)}–${band.bandwidth.highMHz.toFixed(3)} MHz)`;
-}
 
 function BandFigures({ band }: { band: BandComparison }) {
   const method = band.method === "reactance-zero" ? "X crosses zero" : "SWR dip";
@@ -58,7 +51,7 @@ function BandFigures({ band }: { band: BandComparison }) {
           {verdictText[band.verdict]}
         </Figure>
         <Figure name="measured-bandwidth" label="Measured 2:1 bandwidth at the radio">
-          {bandwidthText(band)}
+          {formatBandwidth(band.bandwidth)}
         </Figure>
         <Figure name="band-fits" label="Band fits under 2:1">
           {fitText[band.bandFits]}
@@ -164,10 +157,11 @@ export function SweepAnalysis({ sweep, units, planChanged }: { sweep: SweepDetai
       )}
       <Notice tone="caution" title="Before you cut">
         <ul className="list-disc pl-5">
-          <li>Switch the transmitter off and lower the antenna before touching the wire: its ends carry high RF voltage on the air.</li>
-          <li>Lower and raise masts with a crew of two or more, never in wind or with lightning about, and stay out of the fall zone.</li>
-          <li>Local codes and licensed practice prevail.</li>
+          {TRIM_CAUTIONS.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
         </ul>
+        <p className="mt-2 font-bold">{CLOSING_CAUTION}</p>
       </Notice>
     </div>
   );

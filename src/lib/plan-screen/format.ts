@@ -1,8 +1,10 @@
 /**
  * How the plan screen and the station sheet write the engine's numbers: lengths in the
- * person's units (metric, or feet and inches), impedances as R ± jX, SWR as a ratio.
+ * person's units (metric, or feet and inches), impedances as R ± jX, SWR as a ratio, signed
+ * figures with a true minus sign (U+2212).
  */
 import { feetAndInches } from "@/lib/antenna/cut-sheet";
+import type { SwrBandwidth } from "@/lib/antenna/plan";
 
 export type Units = "metric" | "imperial";
 
@@ -35,4 +37,18 @@ export function formatSwr(swr: number): string {
 
 export function formatMHz(mhz: number): string {
   return `${mhz.toFixed(3)} MHz`;
+}
+
+/** A signed figure: "+1.25", "−0.40", or "0.00" when it rounds to zero; always the true minus sign. */
+export function formatSigned(value: number, digits: number): string {
+  const magnitude = Math.abs(value).toFixed(digits);
+  if (Number(magnitude) === 0) return magnitude;
+  return `${value < 0 ? "−" : "+"}${magnitude}`;
+}
+
+/** The 2:1 bandwidth: "at least" when it runs off an end of the sweep, and the edges in MHz. */
+export function formatBandwidth(width: SwrBandwidth | null): string {
+  if (!width) return "nowhere under 2:1";
+  const atLeast = width.lowOpen || width.highOpen ? "at least " : "";
+  return `${atLeast}${Math.round(width.widthKHz)} kHz (${width.lowMHz.toFixed(3)}–${width.highMHz.toFixed(3)} MHz)`;
 }

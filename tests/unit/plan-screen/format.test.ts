@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatCutLength, formatDistance, formatImpedance, formatMHz, formatSwr } from "@/lib/plan-screen/format";
+import { formatBandwidth, formatCutLength, formatDistance, formatImpedance, formatMHz, formatSigned, formatSwr } from "@/lib/plan-screen/format";
 
 describe("plan screen number formats", () => {
   it("writes lengths in the person's units", () => {
@@ -22,5 +22,19 @@ describe("plan screen number formats", () => {
     expect(formatSwr(1.4249)).toBe("1.42:1");
     expect(formatSwr(250)).toBe("> 99:1");
     expect(formatMHz(14.175)).toBe("14.175 MHz");
+  });
+
+  it("writes signed figures with a plus or a true minus sign, and no sign on a rounded zero", () => {
+    expect(formatSigned(1.254, 2)).toBe("+1.25");
+    expect(formatSigned(-0.4, 2)).toBe("−0.40");
+    expect(formatSigned(-12.6, 0)).toBe("−13");
+    expect(formatSigned(0, 1)).toBe("0.0");
+    expect(formatSigned(-0.004, 2)).toBe("0.00");
+  });
+
+  it("writes the 2:1 bandwidth with its edges, and says when it runs off the sweep", () => {
+    expect(formatBandwidth(null)).toBe("nowhere under 2:1");
+    expect(formatBandwidth({ lowMHz: 14.05, highMHz: 14.25, widthKHz: 200, lowOpen: false, highOpen: false })).toBe("200 kHz (14.050–14.250 MHz)");
+    expect(formatBandwidth({ lowMHz: 7.0, highMHz: 7.1234, widthKHz: 123.4, lowOpen: true, highOpen: false })).toBe("at least 123 kHz (7.000–7.123 MHz)");
   });
 });

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import { Card, PageHeader } from "@/components/ui/notice";
 import { roleLabels } from "@/lib/roles";
-import { listMembers, listPendingInvitations } from "@/server/services/accounts";
+import { formatInZone } from "@/lib/time";
+import { getClubSettings, listMembers, listPendingInvitations } from "@/server/services/accounts";
 import { requirePageViewer } from "@/server/session";
 import { InviteForm, MemberRow } from "./members-client";
 
@@ -9,7 +10,7 @@ export const metadata: Metadata = { title: "Members" };
 
 export default async function MembersPage() {
   const { actor } = await requirePageViewer("members.manage");
-  const [members, invitations] = await Promise.all([listMembers(actor), listPendingInvitations(actor)]);
+  const [members, invitations, { timeZone }] = await Promise.all([listMembers(actor), listPendingInvitations(actor), getClubSettings()]);
   const waiting = members.filter((member) => !member.confirmed);
   return (
     <>
@@ -46,7 +47,7 @@ export default async function MembersPage() {
             <ul className="mt-2 text-sm">
               {invitations.map((invitation) => (
                 <li key={invitation.id}>
-                  {invitation.name} ({invitation.email}), {roleLabels[invitation.role]}, until {new Date(invitation.expiresAt).toLocaleDateString("en-GB")}
+                  {invitation.name} ({invitation.email}), {roleLabels[invitation.role]}, until {formatInZone(invitation.expiresAt, timeZone, "date")}
                 </li>
               ))}
             </ul>

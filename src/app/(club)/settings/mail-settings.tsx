@@ -6,6 +6,7 @@ import { useActionForm } from "@/components/forms/use-action-form";
 import { Button } from "@/components/ui/button";
 import { CheckboxField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { formatInZone } from "@/lib/time";
 import type { ActionResult } from "@/server/action";
 import { alwaysSentSummary, mailCategoryLabels, optionalMailCategories, type OptionalMailCategory } from "@/lib/mail/categories";
 import { mailChoicesSchema } from "@/validations/mail";
@@ -27,7 +28,7 @@ export function MailChoicesForm({ defaults }: { defaults: Record<OptionalMailCat
   );
 }
 
-export function CalendarFeedControls({ active, since }: { active: boolean; since: string | null }) {
+export function CalendarFeedControls({ active, since, timeZone }: { active: boolean; since: string | null; timeZone: string }) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [url, setUrl] = useState<string | null>(null);
@@ -53,7 +54,7 @@ export function CalendarFeedControls({ active, since }: { active: boolean; since
       )}
       {!url && (
         <p className="mb-4 text-slate-700">
-          {active ? `You have a calendar address since ${since ? new Date(since).toLocaleDateString("en-GB") : "earlier"}. Guyline cannot show it again; make a new one if you lost it.` : "You have no calendar address yet."}
+          {active ? `You have a calendar address since ${since ? formatInZone(since, timeZone, "date") : "earlier"}. Guyline cannot show it again; make a new one if you lost it.` : "You have no calendar address yet."}
         </p>
       )}
       <div className="flex flex-wrap gap-2">

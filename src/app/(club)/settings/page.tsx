@@ -14,8 +14,8 @@ export const metadata: Metadata = { title: "Settings" };
 
 export default async function SettingsPage() {
   const { actor, member } = await requirePageViewer("account.edit");
-  const club = can(actor, "club.configure") ? await getClubSettings() : null;
-  const [mailChoices, feed] = await Promise.all([getMailChoices(actor), feedStatus(actor)]);
+  const [settings, mailChoices, feed] = await Promise.all([getClubSettings(), getMailChoices(actor), feedStatus(actor)]);
+  const club = can(actor, "club.configure") ? settings : null;
   return (
     <>
       <PageHeader title="Settings" />
@@ -35,7 +35,7 @@ export default async function SettingsPage() {
         <div>
           <Card title="Calendar feed">
             <p className="mb-3 text-slate-700">One private address for your calendar app with the build sessions you take part in or mentor, kept up to date as they change.</p>
-            {actor.confirmed ? <CalendarFeedControls active={feed.active} since={feed.createdAt} /> : <p>Your account must be confirmed first.</p>}
+            {actor.confirmed ? <CalendarFeedControls active={feed.active} since={feed.createdAt} timeZone={settings.timeZone} /> : <p>Your account must be confirmed first.</p>}
           </Card>
           {devInboxOpen(actor) && (
             <Card title="Development inbox">

@@ -9,7 +9,8 @@ import { Card, EmptyState, Notice, PageHeader } from "@/components/ui/notice";
 import { bandByName, type ItuRegion } from "@/lib/antenna/bands";
 import { MODE_DUTY } from "@/lib/antenna/exposure";
 import { isEditable } from "@/lib/antenna-days/status";
-import type { Units } from "@/lib/plan-screen/format";
+import { CLOSING_CAUTION, LABELLED_SAFETY_CAUTIONS } from "@/lib/plan-screen/cautions";
+import { formatDistance, type Units } from "@/lib/plan-screen/format";
 import { bookedFeedlineText, type BookedFeedline } from "@/lib/station-kits/booked-feedline";
 import { formatRangeInZone } from "@/lib/time";
 import { loadOrNotFound } from "@/server/page-data";
@@ -23,10 +24,9 @@ import { requirePageViewer } from "@/server/session";
 
 export const metadata: Metadata = { title: "Antenna day" };
 
-const m = (value: number) => `${value.toFixed(1)} m`;
-
 function SlotFacts({ slot, feedline, units }: { slot: SlotDto; feedline: BookedFeedline | undefined; units: Units }) {
   const run = slot.feedlineRun;
+  const m = (metres: number) => formatDistance(metres, units);
   const facts: [string, string][] = [
     ["Bands", slot.bands.join(", ")],
     ["Power and mode", `${slot.powerW} W, ${MODE_DUTY[slot.mode].label}`],
@@ -127,13 +127,13 @@ export default async function AntennaDayPage({ params }: { params: Promise<{ day
         </Card>
         <Card title="Safety on the day">
           <ul className="list-disc space-y-1 pl-5 text-sm">
-            <li>Masts near power lines kill: never raise a mast where it could fall onto or touch a line, and keep every fall zone clear of them.</li>
-            <li>Raise masts with a crew of at least two, with a tag line and hard hats; never in wind or with lightning about; stay out of the fall zone while raising.</li>
-            <li>Keep the public outside the RF-exposure distances with barriers and signs; the ends of wire antennas carry high RF voltage: keep them out of reach or guard them.</li>
-            <li>Flag guy ropes at head height; anchors and ropes are trip hazards. Locate buried services before driving anchors.</li>
-            <li>Run generators outdoors, away from tents (carbon monoxide), earthed or bonded as the local electrical code asks.</li>
-            <li>Local codes, permits, the landowner&apos;s rules and licensed practice prevail.</li>
+            {LABELLED_SAFETY_CAUTIONS.map(({ label, text }) => (
+              <li key={label}>
+                <strong>{label}:</strong> {text}
+              </li>
+            ))}
           </ul>
+          <p className="mt-3 font-bold">{CLOSING_CAUTION}</p>
         </Card>
       </div>
 
@@ -178,7 +178,7 @@ export default async function AntennaDayPage({ params }: { params: Promise<{ day
             </div>
             <SlotFacts slot={slot} feedline={feedlines.get(slot.id)} units={member.units} />
             <h4 className="mt-4 mb-1 font-bold">Shifts</h4>
-            <ShiftList slotName={slot.name} shifts={shiftsBySlot[slot.id] ?? []} manage={manage} />
+            <ShiftList slotName={slot.name} shifts={shiftsBySlot[slot.id] ?? []} manage={manage} timeZone={day.timeZone} />
             {manage && <AddShiftForm slotId={slot.id} slotName={slot.name} defaults={{ startsAtLocal: day.startsAtLocal, endsAtLocal: day.endsAtLocal }} />}
           </section>
         ))}

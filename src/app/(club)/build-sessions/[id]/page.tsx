@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { CutSheetTable } from "@/components/antenna-plan/cut-sheet-table";
 import { CancelSessionForm, PlaceControls } from "@/components/build-sessions/place-controls";
 import { PlacesBadge } from "@/components/build-sessions/places";
 import { ButtonLink, buttonClass } from "@/components/ui/button";
 import { Card, Notice, PageHeader } from "@/components/ui/notice";
 import { localCodesPrevail } from "@/lib/build-sessions/safety";
+import { formatDistance } from "@/lib/plan-screen/format";
 import { formatRangeInZone } from "@/lib/time";
 import { PublicError } from "@/server/errors";
 import { can } from "@/server/policy";
@@ -15,10 +17,9 @@ import { cancelBuildSessionAction, cancelSignupAction, signUpAction } from "../a
 
 export const metadata: Metadata = { title: "Build session" };
 
-const metres = (value: number) => `${value.toFixed(value < 10 ? 2 : 1)} m`;
-
 export default async function BuildSessionPage({ params }: { params: Promise<{ id: string }> }) {
-  const { actor } = await requirePageViewer("buildSessions.view");
+  const { actor, member } = await requirePageViewer("buildSessions.view");
+  const units = member.units;
   const { id } = await params;
   const session = await getBuildSession(actor, id).catch((error: unknown) => {
     if (error instanceof PublicError && error.status === 404) notFound();
@@ -110,34 +111,11 @@ export default async function BuildSessionPage({ params }: { params: Promise<{ i
 
       <Card title="Cut sheet">
         <div className="overflow-x-auto">
-          <table className="w-full text-left">
-            <thead>
-              <tr className="text-sm text-slate-600">
-                <th className="py-2 pr-3">Piece</th>
-                <th className="py-2 pr-3">How many</th>
-                <th className="py-2 pr-3">Cut to</th>
-                <th className="py-2">Insulator to insulator</th>
-              </tr>
-            </thead>
-            <tbody>
-              {planResult.cutSheet.lines.map((line) => (
-                <tr key={line.label} className="border-t border-slate-200">
-                  <td className="py-2 pr-3">{line.label}</td>
-                  <td className="py-2 pr-3">{line.count}</td>
-                  <td className="py-2 pr-3 font-bold">
-                    {metres(line.cutLengthM)} <span className="font-normal text-slate-600">({line.cutLength})</span>
-                  </td>
-                  <td className="py-2">
-                    {metres(line.electricalLengthM)} <span className="text-slate-600">({line.electricalLength})</span>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <CutSheetTable cutSheet={planResult.cutSheet} units={units} caption={`${planResult.label}: cut each piece to the bold length`} />
         </div>
         <p className="mt-2 text-sm text-slate-600">{planResult.cutSheet.wrapNote}</p>
         <p className="mt-1 text-sm text-slate-600">
-          Feed with a {planResult.transformer.label} and {planResult.feedline.label} coax ({planResult.feedline.lengthM} m). The lengths are the antenna
+          Feed with a {planResult.transformer.label} and {planResult.feedline.label} coax ({formatDistance(planResult.feedline.lengthM, units)}). The lengths are the antenna
           engine&apos;s, tuned for resonance at the plan&apos;s height and ground; trim on the day with an analyser.
         </p>
       </Card>

@@ -4,6 +4,7 @@ import { PlanParameters } from "@/components/antenna-plan/plan-parameters";
 import { PlanOffsetsCard } from "@/components/sweeps/plan-offsets";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState, PageHeader } from "@/components/ui/notice";
+import { formatInZone } from "@/lib/time";
 import { loadOrNotFound } from "@/server/page-data";
 import { getClubSettings } from "@/server/services/accounts";
 import { getLibraryPlan } from "@/server/services/plans";
@@ -32,7 +33,7 @@ export default async function LibraryPlanPage({ params }: { params: Promise<{ pl
             <PlanParameters parameters={plan.parameters} units={member.units} />
             {plan.notes && <p className="mt-4 whitespace-pre-line text-slate-800">{plan.notes}</p>}
             <p className="mt-4 text-sm text-slate-700">
-              Saved by {plan.createdBy?.name ?? "a former member"} on {plan.createdAt.slice(0, 10)}; last changed {plan.updatedAt.slice(0, 10)}.
+              Saved by {plan.createdBy?.name ?? "a former member"} on {formatInZone(plan.createdAt, timeZone, "date")}; last changed {formatInZone(plan.updatedAt, timeZone, "date")}.
             </p>
           </Card>
           {plan.canEdit && (
@@ -54,7 +55,7 @@ export default async function LibraryPlanPage({ params }: { params: Promise<{ pl
                     {plan.usage.map((use) => (
                       <li key={use.slotId}>
                         <Link href={`/antenna-days/${use.dayId}/slots/${use.slotId}/plan`}>{use.slotName}</Link> on{" "}
-                        <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({use.dayStartsAt.slice(0, 10)}, {use.dayStatus})
+                        <Link href={`/antenna-days/${use.dayId}`}>{use.dayTitle}</Link> ({formatInZone(use.dayStartsAt, timeZone, "date")}, {use.dayStatus})
                       </li>
                     ))}
                   </ul>
@@ -63,7 +64,7 @@ export default async function LibraryPlanPage({ params }: { params: Promise<{ pl
                   <ul className="space-y-2" aria-label="Build sessions using this plan">
                     {plan.buildSessions.map((session) => (
                       <li key={session.sessionId}>
-                        Build session <Link href={`/build-sessions/${session.sessionId}`}>{session.title}</Link> ({session.startsAt.slice(0, 10)}
+                        Build session <Link href={`/build-sessions/${session.sessionId}`}>{session.title}</Link> ({formatInZone(session.startsAt, timeZone, "date")}
                         {session.status === "cancelled" ? ", cancelled" : ""})
                       </li>
                     ))}

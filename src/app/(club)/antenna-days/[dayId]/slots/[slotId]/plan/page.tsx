@@ -16,7 +16,7 @@ import { requirePageViewer } from "@/server/session";
 import { saveToLibraryAction } from "@/app/(club)/bench/actions";
 import { saveSlotPlanAction } from "./actions";
 
-export const metadata: Metadata = { title: "Station plan" };
+export const metadata: Metadata = { title: "Antenna plan" };
 
 export default async function SlotPlanPage({ params, searchParams }: { params: Promise<{ dayId: string; slotId: string }>; searchParams: Promise<{ sweep?: string }> }) {
   const { actor, member } = await requirePageViewer("plans.view");

@@ -10,7 +10,7 @@ import type { PlanResult } from "@/lib/antenna/plan";
 import { planRequestSchema } from "@/lib/antenna/plan-schema";
 import { EngineInputError } from "@/lib/antenna/problems";
 import { bandEdgePoints } from "@/lib/plan-screen/band-edges";
-import { CLOSING_CAUTION, SAFETY_CAUTIONS } from "@/lib/plan-screen/cautions";
+import { CLOSING_CAUTION, LABELLED_SAFETY_CAUTIONS } from "@/lib/plan-screen/cautions";
 import { formatDistance, formatImpedance, formatMHz, formatSwr, type Units } from "@/lib/plan-screen/format";
 import { bookedFeedlineText } from "@/lib/station-kits/booked-feedline";
 import { formatInZone, formatRangeInZone } from "@/lib/time";
@@ -99,27 +99,11 @@ function SafetyBlock({ result, fallZoneM, guyRadiusM, exposureM, units }: { resu
         </dd>
       </dl>
       <ul className="list-disc pl-5">
-        <li>
-          <strong>Power lines:</strong> {SAFETY_CAUTIONS.powerLines}
-        </li>
-        <li>
-          <strong>Fall zone:</strong> {SAFETY_CAUTIONS.fallZone}
-        </li>
-        <li>
-          <strong>RF exposure:</strong> {SAFETY_CAUTIONS.exposure}
-        </li>
-        <li>
-          <strong>End voltage:</strong> {SAFETY_CAUTIONS.endVoltage}
-        </li>
-        <li>
-          <strong>Guying:</strong> {SAFETY_CAUTIONS.guying}
-        </li>
-        <li>
-          <strong>Generators:</strong> {SAFETY_CAUTIONS.generators}
-        </li>
-        <li>
-          <strong>Lightning:</strong> {SAFETY_CAUTIONS.lightning}
-        </li>
+        {LABELLED_SAFETY_CAUTIONS.map(({ label, text }) => (
+          <li key={label}>
+            <strong>{label}:</strong> {text}
+          </li>
+        ))}
       </ul>
       <p className="mt-3 text-lg font-bold">{CLOSING_CAUTION}</p>
     </section>
