@@ -1,8 +1,8 @@
 // Role rules of the antenna-day routes against the real server: coordinators edit, members
 // read and sign up, newcomers read but may not sign up, signed-out requests get 401 and
 // missing resources 404. Source: Guyline product brief (shared/design/product.md), "Roles".
-import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
-import { signInApi, type DemoRole } from "./fixtures";
+import { expect, test, type APIRequestContext } from "@playwright/test";
+import { roleContexts, type DemoRole } from "./fixtures";
 
 const baseURL = `http://localhost:${process.env.GUYLINE_TEST_APP_PORT ?? 3100}`;
 const missing = "00000000-0000-4000-8000-000000000000";
@@ -33,12 +33,6 @@ const slotBody = (name: string) => ({
 });
 const shiftBody = { startsAtLocal: `${date}T10:00`, endsAtLocal: `${date}T12:00`, capacity: 2 };
 
-async function as(role: DemoRole | null): Promise<APIRequestContext> {
-  const context = await playwrightRequest.newContext({ baseURL });
-  if (role) await signInApi(context, role);
-  return context;
-}
-
 interface Fixture {
   siteId: string;
   publishedDayId: string;
@@ -48,14 +42,16 @@ interface Fixture {
 }
 let fixture: Fixture;
 const contexts: Partial<Record<DemoRole | "anonymous", APIRequestContext>> = {};
+const { as, disposeAll } = roleContexts();
+test.afterAll(disposeAll);
 
 test.beforeAll(async () => {
-  const coordinator = await as("coordinator");
+  const coordinator = await as("coordinator", baseURL);
   contexts.coordinator = coordinator;
-  contexts.member = await as("member");
-  contexts.newcomer = await as("newcomer");
-  contexts.steward = await as("steward");
-  contexts.anonymous = await as(null);
+  contexts.member = await as("member", baseURL);
+  contexts.newcomer = await as("newcomer", baseURL);
+  contexts.steward = await as("steward", baseURL);
+  contexts.anonymous = await as(null, baseURL);
   const site = await (await coordinator.post("/api/sites", { data: siteBody(`API field ${dayOffset}-${Math.random().toString(36).slice(2, 7)}`) })).json();
   const session = await (await coordinator.get("/api/auth/session")).json();
   const dayBody = { title: "API day", siteId: site.site.id, startsAtLocal: `${date}T09:00`, endsAtLocal: `${date}T17:00`, meetingPoint: "Gate", description: "", safetyLeadId: session.user.id };
@@ -65,10 +61,6 @@ test.beforeAll(async () => {
   const shift = await (await coordinator.post(`/api/slots/${slot.slot.id}/shifts`, { data: shiftBody })).json();
   await coordinator.patch(`/api/antenna-days/${published.day.id}`, { data: { status: "published" } });
   fixture = { siteId: site.site.id, publishedDayId: published.day.id, draftDayId: draft.day.id, slotId: slot.slot.id, shiftId: shift.shift.id };
-});
-
-test.afterAll(async () => {
-  for (const context of Object.values(contexts)) await context?.dispose();
 });
 
 test("signed-out requests get 401 on every route", async () => {

@@ -174,9 +174,14 @@ describe("station slots", () => {
     const slot = await createSlot(coordinator, day.id, { ...dipoleSlot("Forty", 60, 60), bands: ["40m", "20m"] });
     expect(slot.bands).toEqual(["40m", "20m"]);
     // Cut for 40 m: a half-wave near 20 m long, reaching about 10 m either side of the mast.
+    // Source: reference-data.md §2, resonant length table [C] (thin-wire method of moments): K = L_res/(λ0/2) ≈ 0.96–0.97
+    // for a 2 mm wire; λ0/2 is 21.1 m at 7.1 MHz, so about 20.3 m in free space; ground and insulators shorten a real
+    // wire by a few per cent (common practice). The bounds allow both.
     expect(slot.summary.wireSpanM).toBeGreaterThan(19);
     expect(slot.summary.wireSpanM).toBeLessThan(21.5);
+    // common practice (reference-data.md §8): the fall zone is the mast height + the longest wire reach (10 m + half the span).
     expect(slot.summary.fallZoneRadiusM).toBeCloseTo(10 + slot.summary.wireSpanM / 2, 1);
+    // common practice: the run is the tent distance (20 m) + the mast height (10 m) + slack of 2 m plus 10 % of the ground run.
     expect(slot.feedlineRun.lengthM).toBeCloseTo(20 + 10 + 2 + 2, 6);
 
     expect((await publicErrorOf(createSlot(coordinator, day.id, { ...dipoleSlot("Low", 60, 60), planParams: { family: "dipole", heightM: -1, wireDiameterMm: 2, feedlineType: "rg213" } }))).field).toBe("planParams.heightM");

@@ -2,17 +2,11 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/server/db";
 import { buildSessionSignups, buildSessions, mailOutbox } from "@/server/db/schema";
-import { PublicError, pgErrorCode, pgErrorCodes } from "@/server/errors";
+import { pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { cancelSignup, createBuildSession, getBuildSession, signUpForSession, updateBuildSession } from "@/server/services/build-sessions";
 import { buildSessionSchema } from "@/validations/build-sessions";
 import { outboxFor } from "./mail-helpers";
-import { createPerson, scheduleSession, testPlan, wallTimeInDays } from "./helpers";
-
-async function errorOf(promise: Promise<unknown>): Promise<PublicError> {
-  const error = await promise.then(() => null, (thrown: unknown) => thrown);
-  expect(error).toBeInstanceOf(PublicError);
-  return error as PublicError;
-}
+import { createPerson, publicErrorOf, scheduleSession, testPlan, wallTimeInDays } from "./helpers";
 
 const sessionRow = async (id: string) => (await db().select().from(buildSessions).where(eq(buildSessions.id, id)))[0];
 
@@ -49,8 +43,8 @@ describe("build-session capacity", () => {
     const { id, mentor } = await scheduleSession({ capacity: 5 });
     const person = await createPerson("newcomer");
     await signUpForSession(person, id);
-    expect((await errorOf(signUpForSession(person, id))).status).toBe(409);
-    expect((await errorOf(signUpForSession(mentor, id))).message).toMatch(/mentor this session/);
+    expect((await publicErrorOf(signUpForSession(person, id))).status).toBe(409);
+    expect((await publicErrorOf(signUpForSession(mentor, id))).message).toMatch(/mentor this session/);
     expect((await sessionRow(id)).taken).toBe(1);
   });
 });
@@ -95,7 +89,7 @@ describe("the waitlist", () => {
     expect((await getBuildSession(people[1], id)).myPlace?.status).toBe("confirmed");
     expect((await getBuildSession(people[2], id)).myPlace?.status).toBe("confirmed");
     expect((await getBuildSession(people[3], id)).myPlace).toEqual({ status: "waitlisted", position: 1 });
-    const error = await errorOf(updateBuildSession(coordinator, id, { capacity: 2 }));
+    const error = await publicErrorOf(updateBuildSession(coordinator, id, { capacity: 2 }));
     expect(error.field).toBe("capacity");
   });
 });
@@ -104,23 +98,23 @@ describe("who may do what", () => {
   it("lets only coordinators schedule, and only the person or a coordinator give up a place", async () => {
     const { id, input } = await scheduleSession({ capacity: 2 });
     for (const role of ["steward", "member", "newcomer"] as const) {
-      expect((await errorOf(createBuildSession(await createPerson(role), input))).status).toBe(403);
+      expect((await publicErrorOf(createBuildSession(await createPerson(role), input))).status).toBe(403);
     }
     const [holder, other] = await Promise.all([createPerson("newcomer"), createPerson("member")]);
     await signUpForSession(holder, id);
-    expect((await errorOf(cancelSignup(other, id, holder.id))).status).toBe(403);
-    expect((await errorOf(signUpForSession(await createPerson("newcomer", { confirmed: false }), id))).status).toBe(403);
+    expect((await publicErrorOf(cancelSignup(other, id, holder.id))).status).toBe(403);
+    expect((await publicErrorOf(signUpForSession(await createPerson("newcomer", { confirmed: false }), id))).status).toBe(403);
   });
 
   it("checks the plan with the antenna engine and the mentors against the mentor flag", async () => {
     const coordinator = await createPerson("coordinator");
     const notMentor = await createPerson("member");
     const base = { title: "Bad plan", startsAt: wallTimeInDays(30, "10:00"), endsAt: wallTimeInDays(30, "12:00"), place: "Hall", capacity: 3 };
-    const mentorError = await errorOf(createBuildSession(coordinator, buildSessionSchema.parse({ ...base, plan: testPlan, mentorIds: [notMentor.id] })));
+    const mentorError = await publicErrorOf(createBuildSession(coordinator, buildSessionSchema.parse({ ...base, plan: testPlan, mentorIds: [notMentor.id] })));
     expect(mentorError.field).toBe("mentorIds");
     const mentor = await createPerson("member", { isMentor: true });
     const vertical = { ...testPlan, family: "vertical", heightM: 1, radialDroopDeg: 60 };
-    const planError = await errorOf(createBuildSession(coordinator, buildSessionSchema.parse({ ...base, plan: vertical, mentorIds: [mentor.id] })));
+    const planError = await publicErrorOf(createBuildSession(coordinator, buildSessionSchema.parse({ ...base, plan: vertical, mentorIds: [mentor.id] })));
     expect(planError.field).toBe("plan.heightM");
     expect(buildSessionSchema.safeParse({ ...base, plan: { ...testPlan, band: "11m" }, mentorIds: [mentor.id] }).success).toBe(false);
   });

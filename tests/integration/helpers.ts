@@ -42,6 +42,11 @@ export function wallTimeInDays(days: number, time: string): string {
   return `${Temporal.Now.plainDateISO("Europe/London").add({ days }).toString()}T${time}`;
 }
 
+/** Noon on the test club's clock (Europe/London), `days` from today: a time the reminder sweep runs. */
+export function clubNoonInDays(days: number): Date {
+  return new Date(Temporal.PlainDateTime.from(wallTimeInDays(days, "12:00")).toZonedDateTime("Europe/London").epochMilliseconds);
+}
+
 export const testPlan = {
   family: "dipole",
   band: "20m",

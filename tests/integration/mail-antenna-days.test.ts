@@ -12,7 +12,7 @@ import { setMailChoices } from "@/server/services/mail-preferences";
 import { cancelSignUp, createShift, deleteShift, signUp } from "@/server/services/shifts";
 import { createSlot, deleteSlot } from "@/server/services/station-slots";
 import { dipoleSlot, newDay } from "./antenna-day-helpers";
-import { createPerson } from "./helpers";
+import { clubNoonInDays, createPerson } from "./helpers";
 import { deliverNow, outboxFor, parseCalendar, resolvesToRoute, smtpPort } from "./mail-helpers";
 
 let capture: CaptureServer;
@@ -28,9 +28,6 @@ const appUrl = () => serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
 
 /** The club's date `days` from today (Europe/London), "2026-07-01". */
 const clubDate = (days: number) => Temporal.Now.plainDateISO("Europe/London").add({ days }).toString();
-
-/** Noon on the club's clock, `days` from today: a time the reminder sweep runs. */
-const clubNoon = (days: number) => new Date(Temporal.PlainDate.from(clubDate(days)).toZonedDateTime({ timeZone: "Europe/London", plainTime: "12:00" }).epochMilliseconds);
 
 function icsOf(mail: { attachments: { contentType: string; content: Buffer }[] }) {
   const files = mail.attachments.filter((attachment) => attachment.contentType === "text/calendar");
@@ -163,8 +160,8 @@ describe("shift messages", () => {
     await signUp(operator, shift.id);
 
     // The day before, at noon and again an hour later on the club's clock.
-    expect((await runReminderSweep(clubNoon(19))).queued).toBeGreaterThanOrEqual(1);
-    expect((await runReminderSweep(new Date(clubNoon(19).getTime() + 3_600_000))).queued).toBe(0);
+    expect((await runReminderSweep(clubNoonInDays(19))).queued).toBeGreaterThanOrEqual(1);
+    expect((await runReminderSweep(new Date(clubNoonInDays(19).getTime() + 3_600_000))).queued).toBe(0);
     const rows = await outboxFor([operator.id], "shiftReminder");
     expect(rows).toHaveLength(1);
 

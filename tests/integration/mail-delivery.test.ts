@@ -1,7 +1,6 @@
 import { eq, inArray } from "drizzle-orm";
 import { simpleParser } from "mailparser";
 import { SMTPServer } from "smtp-server";
-import { Temporal } from "temporal-polyfill";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { serverEnv } from "@/env";
 import { db } from "@/server/db";
@@ -12,7 +11,7 @@ import { runReminderSweep } from "@/server/mail/reminders";
 import { cancelSignup, signUpForSession } from "@/server/services/build-sessions";
 import { readUnsubscribeToken } from "@/server/services/mail-preferences";
 import { capturedFor, outboxFor, resolvesToRoute, setAsidePendingMail, smtpPort, startWorkerProcess, waitFor, type WorkerProcess } from "./mail-helpers";
-import { createPerson, scheduleSession } from "./helpers";
+import { clubNoonInDays, createPerson, scheduleSession } from "./helpers";
 
 let capture: CaptureServer | null = null;
 let worker: WorkerProcess;
@@ -92,8 +91,8 @@ describe("reminders", () => {
     await capture!.close();
     capture = null;
     // The day before, at noon on the club's clock.
-    const dayBefore = Temporal.Now.plainDateISO("Europe/London").add({ days: 39 }).toZonedDateTime({ timeZone: "Europe/London", plainTime: "12:00" });
-    const sweep = await runReminderSweep(new Date(dayBefore.epochMilliseconds));
+    const dayBefore = clubNoonInDays(39);
+    const sweep = await runReminderSweep(dayBefore);
     expect(sweep.queued).toBeGreaterThanOrEqual(1);
     const [reminder] = await outboxFor([person.id], "buildSessionReminder");
     expect(reminder.status).toBe("pending");
@@ -108,7 +107,7 @@ describe("reminders", () => {
     capture = await startCaptureServer(smtpPort);
     await waitFor("the retry", async () => (await capturedFor(person.email)).some((mail) => mail.subject.startsWith("Tomorrow:")), 60_000);
     // A second sweep and a little time change nothing: one reminder, sent once.
-    expect((await runReminderSweep(new Date(dayBefore.epochMilliseconds))).queued).toBe(0);
+    expect((await runReminderSweep(dayBefore)).queued).toBe(0);
     await new Promise((resolve) => setTimeout(resolve, 3000));
     const reminders = (await capturedFor(person.email)).filter((mail) => mail.subject === "Tomorrow: Reminder session");
     expect(reminders).toHaveLength(1);

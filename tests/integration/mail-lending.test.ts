@@ -1,7 +1,6 @@
 // E-mail from the lending desk, end to end: the lending service puts each message in the outbox
 // in the transaction of the step that caused it, the reminder sweep adds the daily ones, the real
 // delivery code sends them over SMTP to the local mail server, and mailparser reads them.
-import { Temporal } from "temporal-polyfill";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startCaptureServer, type CaptureServer } from "@/server/mail/capture-server";
 import { runReminderSweep } from "@/server/mail/reminders";
@@ -10,7 +9,7 @@ import { bookForStation, joinWaitlist, requestBooking, stepBooking } from "@/ser
 import { createSlot } from "@/server/services/station-slots";
 import { dipoleSlot, newDay } from "./antenna-day-helpers";
 import { addAnalyser, addCoaxRun, clubTime, testSteward } from "./gear-helpers";
-import { createPerson, wallTimeInDays } from "./helpers";
+import { clubNoonInDays, createPerson, wallTimeInDays } from "./helpers";
 import { deliverNow, outboxFor, smtpPort } from "./mail-helpers";
 
 let capture: CaptureServer;
@@ -22,10 +21,6 @@ afterAll(async () => {
 });
 
 const DAY = 86_400_000;
-
-/** Noon on the club's clock (Europe/London), `days` from today: a time the reminder sweep runs. */
-const clubNoon = (days: number) =>
-  new Date(Temporal.Now.plainDateISO("Europe/London").add({ days }).toZonedDateTime({ timeZone: "Europe/London", plainTime: "12:00" }).epochMilliseconds);
 
 describe("a booking's answer", () => {
   it("tells the borrower it is approved, with where to pick it up, or declined, with the steward's reason", async () => {
@@ -111,8 +106,8 @@ describe("reminders of loans", () => {
     const { booking } = await requestBooking(member, { itemId: item.id, startsAt: wallTimeInDays(0, "00:00"), endsAt: wallTimeInDays(1, "17:00") });
     await stepBooking(await testSteward(), booking.id, { action: "hand-out", condition: "good" });
 
-    expect((await runReminderSweep(clubNoon(0))).queued).toBeGreaterThanOrEqual(1);
-    await runReminderSweep(new Date(clubNoon(0).getTime() + 2 * 3_600_000));
+    expect((await runReminderSweep(clubNoonInDays(0))).queued).toBeGreaterThanOrEqual(1);
+    await runReminderSweep(new Date(clubNoonInDays(0).getTime() + 2 * 3_600_000));
     const rows = await outboxFor([member.id], "itemDueTomorrow");
     expect(rows).toHaveLength(1);
     const [mail] = await deliverNow([rows[0].id]);
@@ -134,13 +129,13 @@ describe("reminders of loans", () => {
     await stepBooking(steward, quietLoan.id, { action: "hand-out", condition: "good" }, new Date(Date.now() - 5 * DAY));
 
     // Twice on one club date: one message.
-    await runReminderSweep(clubNoon(0));
-    await runReminderSweep(new Date(clubNoon(0).getTime() + 5 * 3_600_000));
+    await runReminderSweep(clubNoonInDays(0));
+    await runReminderSweep(new Date(clubNoonInDays(0).getTime() + 5 * 3_600_000));
     expect(await outboxFor([late.id], "itemOverdue")).toHaveLength(1);
     // Who turned lending mail off is not sent it.
     expect((await outboxFor([quiet.id], "itemOverdue")).map((row) => row.status)).toEqual(["skipped"]);
     // The next club date: another.
-    await runReminderSweep(clubNoon(1));
+    await runReminderSweep(clubNoonInDays(1));
     const rows = await outboxFor([late.id], "itemOverdue");
     expect(rows).toHaveLength(2);
 
@@ -150,7 +145,7 @@ describe("reminders of loans", () => {
 
     // Back with the steward: no more reminders.
     await stepBooking(steward, booking.id, { action: "return", condition: "good" });
-    await runReminderSweep(clubNoon(2));
+    await runReminderSweep(clubNoonInDays(2));
     expect(await outboxFor([late.id], "itemOverdue")).toHaveLength(2);
   });
 });

@@ -53,6 +53,7 @@ describe("band edges per ITU Region", () => {
     expect(bandByName("30m", 1)?.status).toBe("secondary");
     expect(bandByName("60m", 2)?.status).toBe("secondary");
     expect(bandByName("6m", 1)?.status).toBe("secondary");
+    // from memory: primary/secondary status is recalled unless reference-data.md §1 marks it verified
     expect(bandByName("6m", 2)?.status).toBe("primary");
   });
 });
@@ -75,11 +76,16 @@ describe("band lookup", () => {
   });
 
   it("gives the arithmetic centre", () => {
+    // Source: ITU Radio Regulations, Art. 5 (Table of Frequency Allocations, 2020 ed., includes WRC-15/-19): 20 m is
+    // 14.000–14.350 MHz, so its centre is 14.175 MHz.
     const band = bandByName("20m", 1);
     expect(band && bandCentreMHz(band)).toBeCloseTo(14.175, 6);
   });
 
   it("lists bands from the lowest frequency up", () => {
+    // Source: ITU Radio Regulations, Art. 5 (Table of Frequency Allocations, 2020 ed., includes WRC-15/-19), as tabled in
+    // reference-data.md §1: 2200 m to 70 cm is 16 bands in Region 2; Region 1 has no 1.25 m band (Region 2's 1.25 m
+    // edges are from memory).
     const lows = bandsForRegion(2).map((band) => band.lowMHz);
     expect(lows).toEqual([...lows].sort((a, b) => a - b));
     expect(bandsForRegion(2)).toHaveLength(16);

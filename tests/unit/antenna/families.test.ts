@@ -141,7 +141,10 @@ describe("every family resonates inside its band with a sensible feed impedance"
   });
 
   it("fan dipole: each element resonates in its own band, tuned jointly", () => {
-    // Source: J. D. Kraus, Antennas, 2nd ed. 1988 (mutual impedance; dipole over ground) — from memory, for the 60–100 Ω range of a resonant dipole at these heights
+    // Source: J. D. Kraus, Antennas, 2nd ed. 1988 (mutual impedance; dipole over ground) — from memory: a lone resonant
+    // dipole at these heights has R of about 58–98 Ω (reference-data.md §3). In a fan the other element hangs close
+    // beside it and their mutual impedance pulls R lower (the 20 m element comes out in the 50s), so the check allows
+    // 40–100 Ω (common practice).
     const result = plan({ family: "fan-dipole", bands: ["40m", "20m"], ...TEST_SITE });
     expectResonantAtCentre(result);
     expect(result.elements.map((element) => element.band)).toEqual(["40m", "20m"]);

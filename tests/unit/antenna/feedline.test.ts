@@ -145,6 +145,8 @@ describe("coax types", () => {
   });
 
   it("is a quarter wave long at the length VF·λ/4", () => {
+    // Source: ARRL Antenna Book (recent editions), Transmission Lines chapter (from memory): VF 0.66 for solid PE
+    // coax such as RG-213 (reference-data.md §5).
     const rg213 = feedlineType("rg213");
     const quarterWave = (0.66 * 299.792458) / 14 / 4;
     expect(lineSection(rg213, 14, quarterWave).phaseRadians).toBeCloseTo(Math.PI / 2, 9);

@@ -18,6 +18,8 @@ describe("club time zone conversions", () => {
   });
 
   it("reads an instant back on the wall clock and as a date", () => {
+    // Source: IANA Time Zone Database, Europe/London: BST (UTC+1) ends on 25 October 2026 at 01:00 UTC, so
+    // 23:30Z on the 24th is still BST, 00:30 on the 25th.
     const instant = new Date("2026-10-24T23:30:00Z");
     expect(instantToWallTime(instant, "Europe/London")).toBe("2026-10-25T00:30");
     expect(instantToDate(instant, "Europe/London")).toBe("2026-10-25");

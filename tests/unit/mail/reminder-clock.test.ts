@@ -10,6 +10,7 @@ describe("when reminders go out", () => {
   });
 
   it("covers tomorrow from local midnight to local midnight", () => {
+    // Source: IANA Time Zone Database, Europe/London (BST = UTC+1 in June): local midnight is 23:00Z the day before.
     const window = reminderWindow(new Date("2026-06-12T15:00:00Z"), "Europe/London")!;
     expect(window.from.toISOString()).toBe("2026-06-12T23:00:00.000Z");
     expect(window.to.toISOString()).toBe("2026-06-13T23:00:00.000Z");

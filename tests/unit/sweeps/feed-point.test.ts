@@ -65,6 +65,7 @@ describe("de-embedding a radio-end reading through a lossy line", () => {
     expect(reading.problems).toEqual([]);
     const views = sweepViews(reading.points, "radio-end", chain);
     expect(views.hasImpedance).toBe(true);
+    expect(views.feed).toHaveLength(31);
     views.feed.forEach((point, i) => {
       const error = Math.hypot((point.r as number) - feed[i].z.re, (point.x as number) - feed[i].z.im);
       expect(error).toBeLessThan(0.003 * Math.hypot(feed[i].z.re, feed[i].z.im));
@@ -79,6 +80,16 @@ describe("de-embedding a radio-end reading through a lossy line", () => {
     const expected = inputImpedance(complex(70, 10), lineSection(chain.line, 14.2, 25));
     close(complex(views.radio[2].r as number, views.radio[2].x as number), expected.re, expected.im, 1e-9);
     expect(views.feed[2]).toMatchObject({ r: 70, x: 10 });
+  });
+
+  it("carries ZL = 100 Ω at the feed point to Zin = 29.07 Ω at the radio through a 90° line with 1 dB matched loss", () => {
+    // Source: reference-data.md §4, Zin examples [C] (lossy-line formula, Pozar, Microwave Engineering §2.7): ZL = 100 Ω, 90°, 1 dB → Zin = 29.07 Ω.
+    const { chain, mhz } = quarterWaveLine(1);
+    const rows = [-0.2, -0.1, 0, 0.1, 0.2].map((offset) => `${mhz + offset},100,0`);
+    const views = sweepViews(readSweepText(["MHz,R,X", ...rows].join("\n")).points, "feed-point", chain);
+    expect(views.radio).toHaveLength(5);
+    expect(views.radio[2].mhz).toBe(mhz);
+    close(complex(views.radio[2].r as number, views.radio[2].x as number), 29.07, 0, 0.005);
   });
 });
 
@@ -106,11 +117,29 @@ describe("SWR alone through a lossy line", () => {
     expect(views.explanation.join(" ")).toMatch(/At 1 frequency the SWR at the radio is higher than any load could give/);
   });
 
+  it.each([
+    [2, 0.5, 1.845],
+    [3, 1.0, 2.318],
+    [5, 1.0, 3.251],
+    [3, 2.0, 1.922],
+    [10, 3.0, 2.39],
+    [10, 0.2, 8.147],
+  ])("carries a feed-point SWR of %f through %f dB of matched loss to %f at the radio", (load, lossDb, input) => {
+    // Source: reference-data.md §4, table "SWR at the input" [C], |Γin| = |ΓL|·10^(−A/10) (ARRL Antenna Book (recent editions), Transmission Lines chapter, from memory).
+    const { chain, mhz } = quarterWaveLine(lossDb);
+    const rows = [-0.2, -0.1, 0, 0.1, 0.2].map((offset) => `${mhz + offset},${load}`);
+    const views = sweepViews(readSweepText(["MHz,SWR", ...rows].join("\n")).points, "feed-point", chain);
+    expect(views.radio).toHaveLength(5);
+    expect(views.radio[2].mhz).toBe(mhz);
+    expect(views.radio[2].swr).toBeCloseTo(input, 3);
+  });
+
   it("round-trips a feed-point SWR to the radio and back", () => {
     const chain: FeedChain = { transformer: TRANSFORMERS["1:1"], line: feedlineType("rg58"), lengthM: 40 };
     const reading = readSweepText("MHz,SWR\n7.0,2.5\n7.05,1.8\n7.1,1.3\n7.15,1.7\n7.2,2.4");
     const toRadio = sweepViews(reading.points, "feed-point", chain);
     const back = sweepViews(toRadio.radio.map((point) => ({ mhz: point.mhz, swr: point.swr as number })), "radio-end", chain);
+    expect(back.feed).toHaveLength(5);
     back.feed.forEach((point, i) => expect(point.swr).toBeCloseTo(reading.points[i].swr, 9));
     expect(toRadio.radio[2].swr).toBeCloseTo(swrFromGamma(inputGammaMagnitude(gammaFromSwr(1.3), (chain.line.k1 * Math.sqrt(7.1) + chain.line.k2 * 7.1) * 0.4)), 12);
   });
@@ -118,6 +147,7 @@ describe("SWR alone through a lossy line", () => {
   it("does not carry SWR alone through a 75 Ω run: the analyser's reference is not the line's", () => {
     const chain: FeedChain = { transformer: TRANSFORMERS["1:1"], line: feedlineType("rg6"), lengthM: 20 };
     const views = sweepViews(readSweepText("MHz,SWR\n7.0,2.5\n7.05,1.8\n7.1,1.3\n7.15,1.7\n7.2,2.4").points, "radio-end", chain);
+    expect(views.feed).toHaveLength(5);
     expect(views.feed.every((point) => point.swr === null)).toBe(true);
     expect(views.explanation[0]).toMatch(/not 50 Ω like the analyser/);
   });
