@@ -19,7 +19,7 @@ import { db, type Executor, type Transaction } from "@/server/db";
 import { gearBookings, gearHistory, gearItemFiles, gearItems, gearWaitlist, storedFiles, users, type GearBookingRow, type GearItemRow } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, canCancelFor, canCoSignLoan, canReturnLoan, canSeeBooking, loanNeedsCoSign, type Actor } from "@/server/policy";
-import { getClubSettings } from "@/server/services/accounts";
+import { getClubSettings, toActor } from "@/server/services/accounts";
 import { itemFileUrl, recordHistory } from "@/server/services/gear";
 import { tellBookingApproved, tellBookingStep, tellOffers } from "@/server/services/lending-messages";
 import { gearKindLabels } from "@/lib/gear/kinds";
@@ -339,7 +339,7 @@ async function bookItem(
 async function actorById(executor: Executor, id: string): Promise<Actor> {
   const [row] = await executor.select().from(users).where(eq(users.id, id));
   if (!row) throw badInput("borrowerId", "That person was not found.");
-  return { id: row.id, role: row.role, isMentor: row.isMentor, confirmed: row.confirmedAt !== null };
+  return toActor(row);
 }
 
 export interface StepResult {
