@@ -11,7 +11,7 @@ import { buildSessionEvent } from "@/lib/calendar/events";
 import { buildCalendar, icsFileName, type CalendarEvent } from "@/lib/calendar/ics";
 import type { ReminderWindow } from "@/lib/mail/reminder-clock";
 import { formatRangeInZone, instantToWallTime, wallTimeToInstant } from "@/lib/time";
-import { serverEnv } from "@/env";
+import { appUrl } from "@/env";
 import { db, type Executor, type Transaction } from "@/server/db";
 import { antennaPlans, buildSessionMentors, buildSessionSignups, buildSessions, clubSettings, users, type OutboxAttachment } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
@@ -189,8 +189,6 @@ export async function getBuildSession(actor: Actor, id: string): Promise<BuildSe
 
 // ---------------------------------------------------------------------------------------------
 // Messages and calendar files
-
-const appUrl = () => serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
 
 function calendarEventOf(row: SessionRow, mentors: PersonRef[]): CalendarEvent {
   return buildSessionEvent(
