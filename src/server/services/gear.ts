@@ -189,11 +189,8 @@ export async function retireItem(actor: Actor, id: string, reason: string): Prom
   });
 }
 
-const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 export async function getItem(actor: Actor, id: string): Promise<GearItemDto> {
   if (!can(actor, "gear.view")) throw forbidden();
-  if (!uuidPattern.test(id)) throw notFound("That item");
   const [row] = await db().select().from(gearItems).where(eq(gearItems.id, id));
   if (!row) throw notFound("That item");
   return toItemDto(row);
