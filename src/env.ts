@@ -39,6 +39,11 @@ export function serverEnv(): ServerEnv {
   return cached;
 }
 
+/** The app's public address without a trailing slash, for links in mail, calendar files and labels. */
+export function appUrl(): string {
+  return serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
+}
+
 export interface SmtpSettings {
   host: string;
   port: number;

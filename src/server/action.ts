@@ -12,6 +12,7 @@ export interface ActionResult<T = undefined> {
   message?: string;
   /** Messages per field, shown beside the field. */
   fieldErrors?: Record<string, string>;
+  /** What the action gives back; on a failure, the facts the PublicError carries (its `details`, such as a booked item's next free time). */
   data?: T;
 }
 
@@ -24,9 +25,13 @@ export function fieldErrorsOf(error: z.ZodError): Record<string, string> {
   return errors;
 }
 
-export function failure(error: unknown): ActionResult<never> {
+/** A thrown error as an action's answer: a PublicError's message (on its field, if it names one) and its details as `data`. */
+export function failure<T = never>(error: unknown): ActionResult<T> {
   if (error instanceof PublicError) {
-    return error.field ? { ok: false, fieldErrors: { [error.field]: error.message } } : { ok: false, message: error.message };
+    const answer: ActionResult<T> = error.field ? { ok: false, fieldErrors: { [error.field]: error.message } } : { ok: false, message: error.message };
+    // The details are the error's facts rather than the action's own result; the form reading them knows their shape.
+    if (error.details) answer.data = error.details as T;
+    return answer;
   }
   console.error(error);
   return { ok: false, message: "Something went wrong on our side. Try again." };

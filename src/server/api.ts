@@ -82,7 +82,7 @@ export function route<P extends z.ZodType = z.ZodUndefined, Q extends z.ZodType 
 
 export function errorResponse(error: unknown): Response {
   if (error instanceof PublicError) {
-    if (error.code === "bad-input") return badRequest([{ path: error.field ?? "", message: error.message }]);
+    if (error.code === "bad-input") return badRequest((error.details?.problems as Problem[] | undefined) ?? [{ path: error.field ?? "", message: error.message }]);
     return NextResponse.json({ error: error.code, message: error.message, ...error.details }, { status: error.status });
   }
   console.error(error);

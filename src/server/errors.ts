@@ -29,6 +29,9 @@ export class PublicError extends Error {
 export const notFound = (what: string) => new PublicError("not-found", `${what} was not found.`);
 export const forbidden = (message = "Your role does not allow this.") => new PublicError("forbidden", message);
 export const badInput = (field: string, message: string) => new PublicError("bad-input", message, field);
+/** Several fields' problems at once: a route answers them all, a form shows the first on its field. */
+export const badInputs = (problems: [{ path: string; message: string }, ...{ path: string; message: string }[]]) =>
+  new PublicError("bad-input", problems[0].message, problems[0].path, { problems });
 export const conflict = (message: string, details?: Record<string, unknown>) =>
   new PublicError("conflict", message, undefined, details);
 

@@ -5,7 +5,7 @@ import { eq, inArray } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { db } from "@/server/db";
 import { gearItems } from "@/server/db/schema";
-import { addItemFile, findItemFile, importItems, listItems, retireItem, updateItem } from "@/server/services/gear";
+import { addItemFile, findItemFile, importItems, listItems, patchItem, retireItem, updateItem } from "@/server/services/gear";
 import { itemHistory, requestBooking, stepBooking } from "@/server/services/lending";
 import { fileResponse, uploadRules } from "@/server/storage/files";
 import { gearItemSchema, gearListQuerySchema } from "@/validations/gear";
@@ -140,5 +140,17 @@ describe("items", () => {
     const input = gearItemSchema.parse({ ...item, condition: "worn" });
     expect((await updateItem(steward, item.id, input)).retiredAt).toBeNull();
     expect((await requestBooking(member, { itemId: item.id, startsAt: clubTime(22, 9), endsAt: clubTime(22, 17) })).outcome).toBe("approved");
+  });
+
+  it("patches some fields under the row lock: two edits at once keep both, a bad field is named", async () => {
+    const steward = await testSteward();
+    const item = await addCoaxRun();
+    await Promise.all([patchItem(steward, item.id, { location: "Shed" }), patchItem(steward, item.id, { lengthM: 12 })]);
+    const [row] = await db().select().from(gearItems).where(eq(gearItems.id, item.id));
+    expect(row).toMatchObject({ location: "Shed", lengthM: 12, kind: "coax" });
+    const refused = await publicErrorOf(patchItem(steward, item.id, { lengthM: -3, name: "" }));
+    expect(refused.code).toBe("bad-input");
+    expect((refused.details?.problems as { path: string }[]).map((problem) => problem.path).sort()).toEqual(["lengthM", "name"]);
+    expect((await publicErrorOf(patchItem(await createPerson("member"), item.id, { location: "Loft" }))).code).toBe("forbidden");
   });
 });

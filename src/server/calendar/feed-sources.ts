@@ -3,7 +3,7 @@
 // Events from a month back stay in the feed, so a change or a cancellation of a recent one
 // still reaches subscribed calendars.
 import { and, eq, gt, inArray, isNotNull, or } from "drizzle-orm";
-import { serverEnv } from "@/env";
+import { appUrl } from "@/env";
 import { descriptionExcerpt } from "@/lib/antenna-days/day-notices";
 import { antennaDayEvent, loanDueEvent, shiftEvent } from "@/lib/calendar/events";
 import type { CalendarEvent } from "@/lib/calendar/ics";
@@ -13,8 +13,6 @@ import type { FeedSource } from "./feeds";
 
 const FEED_PAST_DAYS = 30;
 const feedSince = () => new Date(Date.now() - FEED_PAST_DAYS * 24 * 3600 * 1000);
-const appUrl = () => serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
-
 /** The club's antenna days once published (done and cancelled ones too, so calendars follow). */
 export const antennaDayFeed: FeedSource = {
   name: "antenna days",

@@ -2,7 +2,7 @@
 // feed source. Only the SHA-256 of the token is stored; a wrong or revoked token finds nothing.
 import { createHash, randomBytes } from "node:crypto";
 import { eq } from "drizzle-orm";
-import { serverEnv } from "@/env";
+import { appUrl } from "@/env";
 import { buildCalendar, type CalendarEvent } from "@/lib/calendar/ics";
 import { db } from "@/server/db";
 import { calendarFeeds } from "@/server/db/schema";
@@ -22,7 +22,6 @@ export const feedSources: FeedSource[] = [antennaDayFeed, shiftFeed, buildSessio
 
 const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export const appUrl = () => serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
 
 export const feedUrl = (token: string) => `${appUrl()}/api/calendar/${token}`;
 

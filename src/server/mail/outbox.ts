@@ -3,7 +3,7 @@
 // the worker sends it. Example:
 //   await enqueueMail(tx, { template: "shiftReminder", to: { userId }, key: `shift-reminder:${shiftId}:${userId}`, data });
 import { eq, and } from "drizzle-orm";
-import { serverEnv } from "@/env";
+import { appUrl, serverEnv } from "@/env";
 import { isOptionalCategory } from "@/lib/mail/categories";
 import type { MailContext } from "@/lib/mail/layout";
 import { mailTemplates, renderTemplate, type TemplateData, type TemplateName } from "@/lib/mail/templates";
@@ -46,19 +46,18 @@ export async function enqueueMail<N extends TemplateName>(executor: Executor, ma
 
   const [club] = await executor.select({ name: clubSettings.clubName, timeZone: clubSettings.timeZone }).from(clubSettings);
   const env = serverEnv();
-  const appUrl = env.NEXTAUTH_URL.replace(/\/$/, "");
   const token = unsubscribable ? signUnsubscribeToken(unsubscribable, env.NEXTAUTH_SECRET) : null;
   const context: MailContext = {
     clubName: club.name,
     timeZone: club.timeZone,
-    appUrl,
+    appUrl: appUrl(),
     recipientName: recipient.name,
-    unsubscribeUrl: token ? `${appUrl}/unsubscribe/${token}` : null,
+    unsubscribeUrl: token ? `${appUrl()}/unsubscribe/${token}` : null,
   };
   const content = renderTemplate(template, mail.data, context);
   // RFC 8058: a one-click unsubscribe is a POST to the List-Unsubscribe address.
   const headers: Record<string, string> = token
-    ? { "List-Unsubscribe": `<${appUrl}/api/unsubscribe/${token}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" }
+    ? { "List-Unsubscribe": `<${appUrl()}/api/unsubscribe/${token}>`, "List-Unsubscribe-Post": "List-Unsubscribe=One-Click" }
     : {};
 
   const turnedOff =

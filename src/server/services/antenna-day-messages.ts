@@ -3,7 +3,7 @@
 // second pool connection), so a message exists exactly when the change that caused it commits.
 import { and, eq, gte, isNotNull, lt, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { serverEnv } from "@/env";
+import { appUrl } from "@/env";
 import { dayChanges, dayNotice, descriptionExcerpt, type DayFacts } from "@/lib/antenna-days/day-notices";
 import { antennaDayEvent } from "@/lib/calendar/events";
 import { buildCalendar, icsFileName } from "@/lib/calendar/ics";
@@ -13,7 +13,6 @@ import { antennaDays, clubSettings, shifts, shiftSignups, sites, stationSlots, u
 import { enqueueMail } from "@/server/mail/outbox";
 import type { ReminderSource } from "@/server/mail/reminders";
 
-const appUrl = () => serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
 const dayPath = (dayId: string) => `/antenna-days/${dayId}`;
 
 const safetyLeads = alias(users, "safety_leads");

@@ -4,17 +4,18 @@
 // update and a check constraint behind it. When a place frees up, the first in line gets it
 // in the same transaction and hears by e-mail.
 import { and, asc, count, desc, eq, gt, gte, inArray, ne, sql } from "drizzle-orm";
-import { EngineInputError, plan as runPlan, type PlanRequest, type PlanResult } from "@/lib/antenna";
+import { EngineInputError, type PlanRequest, type PlanResult } from "@/lib/antenna";
 import { kitLines, materialsFor, type Materials } from "@/lib/build-sessions/materials";
 import { buildSessionSafety, type SafetySection } from "@/lib/build-sessions/safety";
 import { buildSessionEvent } from "@/lib/calendar/events";
 import { buildCalendar, icsFileName, type CalendarEvent } from "@/lib/calendar/ics";
 import type { ReminderWindow } from "@/lib/mail/reminder-clock";
 import { formatRangeInZone, instantToWallTime, wallTimeToInstant } from "@/lib/time";
-import { serverEnv } from "@/env";
+import { appUrl } from "@/env";
 import { db, type Executor, type Transaction } from "@/server/db";
 import { antennaPlans, buildSessionMentors, buildSessionSignups, buildSessions, clubSettings, users, type OutboxAttachment } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
+import { runPlan } from "@/server/engine/run";
 import { enqueueMail } from "@/server/mail/outbox";
 import { can, canCancelFor, canMentorSessions, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
@@ -145,24 +146,20 @@ export async function listBuildSessions(actor: Actor, options: { includePast?: b
   return rows.map((row) => summaryOf(row, mentors.get(row.id)!, signups.get(row.id)!, actor.id));
 }
 
-/** The engine's plan for a stored request; the request was checked when it was saved. */
-function planFor(request: PlanRequest): PlanResult {
-  return runPlan(request);
-}
-
 export async function getBuildSession(actor: Actor, id: string): Promise<BuildSessionDetail> {
   if (!can(actor, "buildSessions.view")) throw forbidden();
   const [row] = await db().select().from(buildSessions).where(eq(buildSessions.id, id));
   if (!row) throw notFound("That build session");
-  const [mentors, signups, club, libraryPlan] = await Promise.all([
+  // The stored request was checked when it was saved; the engine runs on the worker pool.
+  const [mentors, signups, club, libraryPlan, result] = await Promise.all([
     mentorsOf(db(), [id]),
     signupsOf(db(), [id]),
     getClubSettings(),
     row.libraryPlanId ? db().query.antennaPlans.findFirst({ where: eq(antennaPlans.id, row.libraryPlanId), columns: { id: true, name: true } }) : null,
+    runPlan(row.plan),
   ]);
   const sessionMentors = mentors.get(id)!;
   const sessionSignups = signups.get(id)!;
-  const result = planFor(row.plan);
   const seesNames = can(actor, "buildSessions.manage") || sessionMentors.some((mentor) => mentor.id === actor.id);
   return {
     ...summaryOf(row, sessionMentors, sessionSignups, actor.id),
@@ -192,8 +189,6 @@ export async function getBuildSession(actor: Actor, id: string): Promise<BuildSe
 
 // ---------------------------------------------------------------------------------------------
 // Messages and calendar files
-
-const appUrl = () => serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
 
 function calendarEventOf(row: SessionRow, mentors: PersonRef[]): CalendarEvent {
   return buildSessionEvent(
@@ -248,13 +243,22 @@ async function messageBasics(executor: Executor, row: SessionRow) {
   };
 }
 
-function bringLines(row: SessionRow): string[] {
-  return kitLines(materialsFor(planFor(row.plan), 1, { raisesMast: row.raisesMast }).kit);
+/** What one person brings, from the engine's plan for the session's antenna (run on the worker pool). */
+async function bringLines(row: SessionRow): Promise<string[]> {
+  const result = await runPlan(row.plan);
+  return kitLines(materialsFor(result, 1, { raisesMast: row.raisesMast }).kit);
 }
 
-async function tellPlace(tx: Transaction, row: SessionRow, signup: { id: string; userId: string }, kind: "confirmed" | "promoted") {
-  const data = { ...(await messageBasics(tx, row)), bring: bringLines(row) };
-  const attachments = [await sessionIcs(tx, row)];
+type PlaceMessage = { data: Awaited<ReturnType<typeof messageBasics>> & { bring: string[] }; attachments: OutboxAttachment[] };
+
+/** The message about a place at a session: the same for everyone told about it, so built once per session. */
+async function placeMessage(tx: Transaction, row: SessionRow): Promise<PlaceMessage> {
+  const basics = await messageBasics(tx, row);
+  const bring = await bringLines(row);
+  return { data: { ...basics, bring }, attachments: [await sessionIcs(tx, row)] };
+}
+
+async function tellPlace(tx: Transaction, { data, attachments }: PlaceMessage, signup: { id: string; userId: string }, kind: "confirmed" | "promoted") {
   const to = { userId: signup.userId };
   if (kind === "confirmed") {
     await enqueueMail(tx, { template: "buildSessionConfirmed", to, key: `build-session-confirmed:${signup.id}`, data, attachments });
@@ -266,6 +270,8 @@ async function tellPlace(tx: Transaction, row: SessionRow, signup: { id: string;
 /** Gives freed places to the first in line, as many as the capacity allows, and tells each. */
 async function promoteFromWaitlist(tx: Transaction, row: SessionRow): Promise<SessionRow> {
   let session = row;
+  // Title, time, place, mentors, plan and sequence stay as they are while places are handed out.
+  let message: PlaceMessage | null = null;
   while (session.taken < session.capacity) {
     const [first] = await tx
       .select({ id: buildSessionSignups.id, userId: buildSessionSignups.userId })
@@ -280,7 +286,8 @@ async function promoteFromWaitlist(tx: Transaction, row: SessionRow): Promise<Se
       .set({ taken: sql`${buildSessions.taken} + 1` })
       .where(and(eq(buildSessions.id, session.id), sql`${buildSessions.taken} < ${buildSessions.capacity}`))
       .returning();
-    await tellPlace(tx, session, first, "promoted");
+    message ??= await placeMessage(tx, session);
+    await tellPlace(tx, message, first, "promoted");
   }
   return session;
 }
@@ -288,9 +295,9 @@ async function promoteFromWaitlist(tx: Transaction, row: SessionRow): Promise<Se
 // ---------------------------------------------------------------------------------------------
 // Coordinators: create, change, cancel
 
-function checkPlan(request: PlanRequest): void {
+async function checkPlan(request: PlanRequest): Promise<void> {
   try {
-    planFor(request);
+    await runPlan(request);
   } catch (error) {
     if (error instanceof EngineInputError) {
       const [first] = error.problems;
@@ -328,7 +335,7 @@ export async function createBuildSession(actor: Actor, input: BuildSessionInput)
   const { timeZone } = await getClubSettings();
   const { startsAt, endsAt } = instants(input.startsAt, input.endsAt, timeZone);
   if (startsAt <= new Date()) throw badInput("startsAt", "Choose a time in the future.");
-  checkPlan(input.plan);
+  await checkPlan(input.plan);
   return db().transaction(async (tx) => {
     await checkMentors(tx, input.mentorIds);
     await checkLibraryPlan(tx, input.libraryPlanId);
@@ -368,7 +375,7 @@ async function peopleSignedUp(tx: Transaction, sessionId: string): Promise<strin
 export async function updateBuildSession(actor: Actor, id: string, patch: BuildSessionPatch): Promise<void> {
   if (!can(actor, "buildSessions.manage")) throw forbidden();
   const { timeZone } = await getClubSettings();
-  if (patch.plan) checkPlan(patch.plan);
+  if (patch.plan) await checkPlan(patch.plan);
   await db().transaction(async (tx) => {
     const before = await lockSession(tx, id);
     if (before.status === "cancelled") throw conflict("This build session is cancelled; schedule a new one instead.");
@@ -478,7 +485,7 @@ export async function signUpForSession(actor: Actor, sessionId: string): Promise
       const status = withPlace ? "confirmed" : "waitlisted";
       const [signup] = await tx.insert(buildSessionSignups).values({ sessionId, userId: actor.id, status }).returning();
       if (withPlace) {
-        await tellPlace(tx, withPlace, signup, "confirmed");
+        await tellPlace(tx, await placeMessage(tx, withPlace), signup, "confirmed");
         return { status, position: null };
       }
       const [{ ahead }] = await tx
@@ -539,15 +546,25 @@ export const buildSessionReminders = {
           sql`${buildSessions.startsAt} < ${window.to}`,
         ),
       );
-    let queued = 0;
+    const bySession = new Map<string, { session: SessionRow; userIds: string[] }>();
     for (const { session, userId } of rows) {
-      const outcome = await enqueueMail(tx, {
-        template: "buildSessionReminder",
-        to: { userId },
-        key: `build-session-reminder:${session.id}:${userId}:${window.date}`,
-        data: { ...(await messageBasics(tx, session)), bring: bringLines(session) },
-      });
-      if (outcome === "queued") queued += 1;
+      const entry = bySession.get(session.id) ?? { session, userIds: [] };
+      entry.userIds.push(userId);
+      bySession.set(session.id, entry);
+    }
+    let queued = 0;
+    for (const { session, userIds } of bySession.values()) {
+      // One message (and one engine run) per session, whoever has a place at it.
+      const data = { ...(await messageBasics(tx, session)), bring: await bringLines(session) };
+      for (const userId of userIds) {
+        const outcome = await enqueueMail(tx, {
+          template: "buildSessionReminder",
+          to: { userId },
+          key: `build-session-reminder:${session.id}:${userId}:${window.date}`,
+          data,
+        });
+        if (outcome === "queued") queued += 1;
+      }
     }
     return queued;
   },

@@ -1,8 +1,9 @@
 // The gear shelf: items, their photos and manuals, the shelf table, CSV import and export.
 import { and, asc, count, desc, eq, ilike, inArray, isNull, or, sql, type SQL } from "drizzle-orm";
-import { db, type Executor } from "@/server/db";
+import { db, type Executor, type Transaction } from "@/server/db";
+import { formatPath } from "@/server/api";
 import { gearBookings, gearHistory, gearItemFiles, gearItems, storedFiles, users, type GearItemRow } from "@/server/db/schema";
-import { badInput, conflict, forbidden, notFound, pgConstraint, pgErrorCode, pgErrorCodes } from "@/server/errors";
+import { badInput, badInputs, conflict, forbidden, notFound, pgConstraint, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, canReturnLoan, type Actor } from "@/server/policy";
 import { findStoredFile, storeFile, uploadRules } from "@/server/storage/files";
 import { getClubSettings } from "@/server/services/accounts";
@@ -11,7 +12,7 @@ import { csvColumns, readGearCsv, writeGearCsv, type CsvField, type ImportProble
 import { isOverdue } from "@/lib/lending/availability";
 import { wallTimeToInstant } from "@/lib/time";
 import { Temporal } from "temporal-polyfill";
-import type { GearItemInput, GearListQuery } from "@/validations/gear";
+import { gearItemSchema, type GearItemInput, type GearListQuery } from "@/validations/gear";
 
 /** What the client sees of an item: every column, dates as ISO strings. */
 export interface GearItemDto {
@@ -130,46 +131,70 @@ const editedFieldLabels: Partial<Record<keyof GearItemRow, string>> = {
 /** Edits an item; a retired item given a shelf condition comes back onto the shelf. */
 export async function updateItem(actor: Actor, id: string, input: GearItemInput): Promise<GearItemDto> {
   if (!can(actor, "gear.manage")) throw forbidden();
+  return db().transaction(async (tx) => writeItem(tx, actor, await lockItemRow(tx, id), input));
+}
+
+/**
+ * A partial edit (the HTTP API's PATCH): the given fields over the item as it is under the row
+ * lock, checked as a whole item, so two edits at once never undo each other's fields.
+ */
+export async function patchItem(actor: Actor, id: string, patch: Record<string, unknown>): Promise<GearItemDto> {
+  if (!can(actor, "gear.manage")) throw forbidden();
   return db().transaction(async (tx) => {
-    const [before] = await tx.select().from(gearItems).where(eq(gearItems.id, id)).for("update");
-    if (!before) throw notFound("That item");
-    const columns = itemColumns(input);
-    const [row] = await tx
-      .update(gearItems)
-      .set({ ...columns, retiredAt: null, updatedAt: new Date() })
-      .where(eq(gearItems.id, id))
-      .returning()
-      .catch((error: unknown) => labelCodeTaken(error, input.labelCode));
-    const changed = Object.entries(editedFieldLabels)
-      .filter(([field]) => before[field as keyof GearItemRow] !== row[field as keyof GearItemRow])
-      .map(([, label]) => label);
-    const detailsChanged = (Object.keys(columns) as (keyof typeof columns)[]).some(
-      (field) => !(field in editedFieldLabels) && field !== "condition" && before[field] !== row[field],
-    );
-    if (detailsChanged) changed.push("details");
-    if (before.condition !== row.condition) {
-      await recordHistory(tx, {
-        itemId: id,
-        actorId: actor.id,
-        event: before.condition === "retired" ? "item-restored" : "condition-changed",
-        fromState: before.condition,
-        toState: row.condition,
-        condition: row.condition,
-      });
+    const before = await lockItemRow(tx, id);
+    const parsed = gearItemSchema.safeParse({ ...toItemDto(before), ...patch });
+    if (!parsed.success) {
+      const [first, ...rest] = parsed.error.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
+      throw badInputs([first, ...rest]);
     }
-    if (changed.length > 0) {
-      await recordHistory(tx, { itemId: id, actorId: actor.id, event: "item-edited", note: `Changed: ${changed.join(", ")}.` });
-    }
-    return toItemDto(row);
+    return writeItem(tx, actor, before, parsed.data);
   });
+}
+
+async function lockItemRow(tx: Transaction, id: string): Promise<GearItemRow> {
+  const [row] = await tx.select().from(gearItems).where(eq(gearItems.id, id)).for("update");
+  if (!row) throw notFound("That item");
+  return row;
+}
+
+/** Writes an edit over the locked row and records what changed in the item's history. */
+async function writeItem(tx: Transaction, actor: Actor, before: GearItemRow, input: GearItemInput): Promise<GearItemDto> {
+  const id = before.id;
+  const columns = itemColumns(input);
+  const [row] = await tx
+    .update(gearItems)
+    .set({ ...columns, retiredAt: null, updatedAt: new Date() })
+    .where(eq(gearItems.id, id))
+    .returning()
+    .catch((error: unknown) => labelCodeTaken(error, input.labelCode));
+  const changed = Object.entries(editedFieldLabels)
+    .filter(([field]) => before[field as keyof GearItemRow] !== row[field as keyof GearItemRow])
+    .map(([, label]) => label);
+  const detailsChanged = (Object.keys(columns) as (keyof typeof columns)[]).some(
+    (field) => !(field in editedFieldLabels) && field !== "condition" && before[field] !== row[field],
+  );
+  if (detailsChanged) changed.push("details");
+  if (before.condition !== row.condition) {
+    await recordHistory(tx, {
+      itemId: id,
+      actorId: actor.id,
+      event: before.condition === "retired" ? "item-restored" : "condition-changed",
+      fromState: before.condition,
+      toState: row.condition,
+      condition: row.condition,
+    });
+  }
+  if (changed.length > 0) {
+    await recordHistory(tx, { itemId: id, actorId: actor.id, event: "item-edited", note: `Changed: ${changed.join(", ")}.` });
+  }
+  return toItemDto(row);
 }
 
 /** Retires an item: it stays on record with its history but can no longer be booked. */
 export async function retireItem(actor: Actor, id: string, reason: string): Promise<GearItemDto> {
   if (!can(actor, "gear.manage")) throw forbidden();
   return db().transaction(async (tx) => {
-    const [before] = await tx.select().from(gearItems).where(eq(gearItems.id, id)).for("update");
-    if (!before) throw notFound("That item");
+    const before = await lockItemRow(tx, id);
     if (before.condition === "retired") throw conflict("This item is already retired.");
     const [holding] = await tx
       .select({ state: gearBookings.state })
@@ -189,11 +214,8 @@ export async function retireItem(actor: Actor, id: string, reason: string): Prom
   });
 }
 
-const uuidPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 export async function getItem(actor: Actor, id: string): Promise<GearItemDto> {
   if (!can(actor, "gear.view")) throw forbidden();
-  if (!uuidPattern.test(id)) throw notFound("That item");
   const [row] = await db().select().from(gearItems).where(eq(gearItems.id, id));
   if (!row) throw notFound("That item");
   return toItemDto(row);

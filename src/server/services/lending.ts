@@ -19,7 +19,7 @@ import { db, type Executor, type Transaction } from "@/server/db";
 import { gearBookings, gearHistory, gearItemFiles, gearItems, gearWaitlist, storedFiles, users, type GearBookingRow, type GearItemRow } from "@/server/db/schema";
 import { badInput, conflict, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, canCancelFor, canCoSignLoan, canReturnLoan, canSeeBooking, loanNeedsCoSign, type Actor } from "@/server/policy";
-import { getClubSettings } from "@/server/services/accounts";
+import { getClubSettings, toActor } from "@/server/services/accounts";
 import { itemFileUrl, recordHistory } from "@/server/services/gear";
 import { tellBookingApproved, tellBookingStep, tellOffers } from "@/server/services/lending-messages";
 import { gearKindLabels } from "@/lib/gear/kinds";
@@ -184,12 +184,17 @@ interface HoldOptions {
   timeZone: string;
 }
 
+/** The answer when the overlap guard (the exclusion constraint) refused a write: what holds the time now. */
 async function timeTakenError(executor: Executor, item: GearItemRow, wanted: Interval, options: HoldOptions) {
-  const held = await heldIntervals(executor, item.id, options);
+  return timeTaken(item, await heldIntervals(executor, item.id, options), wanted, options.timeZone);
+}
+
+/** A clash with the time held, with the next free time of the same length for the form to offer. */
+function timeTaken(item: GearItemRow, held: Interval[], wanted: Interval, timeZone: string) {
   const start = nextFreeStart(held, wanted);
   const end = new Date(start.getTime() + (wanted.end.getTime() - wanted.start.getTime()));
   return conflict(
-    `${item.labelCode} ${item.name} is already booked for part of that time. It is free again from ${formatInZone(start, options.timeZone)} for as long as you asked. Ask for that time, or join the waitlist to be offered your time if it comes free.`,
+    `${item.labelCode} ${item.name} is already booked for part of that time. It is free again from ${formatInZone(start, timeZone)} for as long as you asked. Ask for that time, or join the waitlist to be offered your time if it comes free.`,
     { nextFreeStart: start.toISOString(), nextFreeEnd: end.toISOString(), canJoinWaitlist: true },
   );
 }
@@ -224,7 +229,7 @@ async function createBooking(tx: Transaction, input: NewBooking): Promise<{ book
   if (input.slotFeedline && (item.kind !== "coax" || !input.stationSlotId)) throw badInput("itemId", "A slot's feedline is a coax run booked for a station slot.");
   const coSignRequired = !input.approvedBy && loanNeedsCoSign(borrower, item.kind);
   const held = await heldIntervals(tx, item.id, { forUserId: borrower.id, now });
-  if (!isFree(held, wanted)) throw await timeTakenError(tx, item, wanted, { forUserId: borrower.id, now, timeZone: input.timeZone });
+  if (!isFree(held, wanted)) throw timeTaken(item, held, wanted, input.timeZone);
   const approveNow = !!input.approvedBy || (item.approvalRule === "automatic" && !coSignRequired);
   const [booking] = await tx
     .insert(gearBookings)
@@ -339,7 +344,7 @@ async function bookItem(
 async function actorById(executor: Executor, id: string): Promise<Actor> {
   const [row] = await executor.select().from(users).where(eq(users.id, id));
   if (!row) throw badInput("borrowerId", "That person was not found.");
-  return { id: row.id, role: row.role, isMentor: row.isMentor, confirmed: row.confirmedAt !== null };
+  return toActor(row);
 }
 
 export interface StepResult {
@@ -425,7 +430,8 @@ async function stepChanges(
       if (item.retiredAt) throw conflict(`${item.labelCode} is retired and cannot be lent.`);
       const hold = { exceptBookingId: booking.id, forUserId: booking.borrowerId, now, timeZone };
       const wanted = { start: booking.startsAt, end: booking.endsAt };
-      if (!isFree(await heldIntervals(tx, item.id, hold), wanted)) throw await timeTakenError(tx, item, wanted, hold);
+      const held = await heldIntervals(tx, item.id, hold);
+      if (!isFree(held, wanted)) throw timeTaken(item, held, wanted, hold.timeZone);
       return { decidedBy: actor.id, decidedAt: now };
     }
     case "decline":

@@ -91,13 +91,20 @@ function planProblem(path: string, message: string) {
   return badInput(slotFieldOfPlanPath(path), message);
 }
 
-/** Validates the slot's plan with the engine's schema; the request and the stored form of the parameters. */
-function validatePlan(fields: SlotFields, site: SiteRow, region: ItuRegion): { request: PlanRequest; planParams: SlotPlanParams } {
-  const input = planRequestForSlot(
-    { bands: fields.bands, powerW: fields.powerW, mode: fields.mode, planParams: fields.planParams, position: [fields.x, fields.y], tent: [fields.tentX, fields.tentY], feedlineRunOverrideM: fields.feedlineRunOverrideM },
+type SlotPlanFields = Pick<SlotFields, "bands" | "powerW" | "mode" | "planParams" | "x" | "y" | "tentX" | "tentY" | "feedlineRunOverrideM">;
+
+/** The engine's full request for a slot's antenna at its place on the site (as the slot itself stores it). */
+function slotPlanRequestOf(slot: SlotPlanFields, site: SiteRow, region: ItuRegion): PlanRequestInput {
+  return planRequestForSlot(
+    { bands: slot.bands, powerW: slot.powerW, mode: slot.mode, planParams: slot.planParams, position: [slot.x, slot.y], tent: [slot.tentX, slot.tentY], feedlineRunOverrideM: slot.feedlineRunOverrideM },
     site,
     region,
   );
+}
+
+/** Validates the slot's plan with the engine's schema; the request and the stored form of the parameters. */
+function validatePlan(fields: SlotFields, site: SiteRow, region: ItuRegion): { request: PlanRequest; planParams: SlotPlanParams } {
+  const input = slotPlanRequestOf(fields, site, region);
   const parsed = planRequestSchema.safeParse(input);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
@@ -243,11 +250,7 @@ export async function getSlotWithContext(actor: Actor, slotId: string): Promise<
   const region = ituRegion as ItuRegion;
   const siteRow = await db().query.sites.findFirst({ where: eq(sites.id, day.site.id) });
   if (!siteRow) throw notFound("The day's site");
-  const planRequest = planRequestForSlot(
-    { bands: slot.bands, powerW: slot.powerW, mode: slot.mode, planParams: slot.planParams, position: [slot.x, slot.y], tent: [slot.tentX, slot.tentY], feedlineRunOverrideM: slot.feedlineRunOverrideM },
-    siteRow,
-    region,
-  );
+  const planRequest = slotPlanRequestOf(slot, siteRow, region);
   return { slot, day, site: toSiteDto(siteRow), region, planRequest, shifts, canEdit: can(actor, "antennaDays.manage") && isEditable(day.status) };
 }
 
@@ -295,7 +298,30 @@ export interface SlotFeedlineContext extends SlotContext {
  */
 export async function getSlotWithFeedline(actor: Actor, slotId: string): Promise<SlotFeedlineContext> {
   const context = await getSlotWithContext(actor, slotId);
+  return { ...context, ...(await withBookedFeedline(slotId, context.planRequest)) };
+}
+
+/** The request with the coax run booked as the slot's feedline, when there is one. */
+async function withBookedFeedline(slotId: string, request: PlanRequestInput): Promise<{ planRequest: PlanRequestInput; feedline: BookedFeedline | null }> {
   const feedline = (await bookedFeedlines([slotId])).get(slotId) ?? null;
-  const planRequest = feedline ? withFeedline(context.planRequest, { type: feedline.cableType, lengthM: feedline.lengthM }) : context.planRequest;
-  return { ...context, planRequest, feedline };
+  return { planRequest: feedline ? withFeedline(request, { type: feedline.cableType, lengthM: feedline.lengthM }) : request, feedline };
+}
+
+export interface SlotPlanRequest {
+  dayId: string;
+  /** The engine's full request for the slot, with the booked coax run as its feedline when there is one. */
+  planRequest: PlanRequestInput;
+  feedline: BookedFeedline | null;
+}
+
+/**
+ * The slot's plan request with its booked feedline, as `getSlotWithFeedline` computes it, without
+ * the day, site and shifts the pages need (for comparing the slot with a measurement). Throws 404
+ * for a slot the person may not see.
+ */
+export async function slotPlanRequest(actor: Actor, slotId: string): Promise<SlotPlanRequest> {
+  const slot = await findSlotRow(db(), slotId);
+  const day = await findVisibleDay(actor, slot.dayId);
+  const [site, { ituRegion }] = await Promise.all([siteOf(db(), day), getClubSettings()]);
+  return { dayId: day.id, ...(await withBookedFeedline(slotId, slotPlanRequestOf(slot, site, ituRegion as ItuRegion))) };
 }

@@ -10,13 +10,10 @@
 import { and, asc, desc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { timeInputToInstant } from "@/lib/lending/time-input";
 import { instantToWallTime } from "@/lib/time";
-import type { ItuRegion } from "@/lib/antenna/bands";
 import { TRANSFORMERS, feedlineType } from "@/lib/antenna/feedline-types";
 import { planModel, significant, type PlanResult } from "@/lib/antenna/plan";
 import { planRequestSchema, type PlanRequest } from "@/lib/antenna/plan-schema";
 import { EngineInputError } from "@/lib/antenna/problems";
-import { planRequestForSlot } from "@/lib/antenna-days/slot-plan";
-import { withFeedline } from "@/lib/station-kits/run-figures";
 import { analysisOf, compareSweep, trimRequestOf, type BandComparison, type SweepAnalysis, type TrimOutcome } from "@/lib/sweeps/analysis";
 import { chainOf, sweepViews, type SweepPlace, type SweepViews } from "@/lib/sweeps/feed-point";
 import { meanOffsets, nextCut, type BandOffset, type NextCut } from "@/lib/sweeps/next-cut";
@@ -31,7 +28,6 @@ import {
   measuredSweeps,
   shiftSignups,
   shifts,
-  sites,
   stationSlots,
   storedFiles,
   users,
@@ -41,8 +37,8 @@ import { runPlan, runTrim } from "@/server/engine/run";
 import { PublicError, badInput, forbidden, notFound } from "@/server/errors";
 import { can, canDeleteSweep, canUploadSweep, type Actor } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
-import { findVisibleDay, visibleStatuses } from "@/server/services/antenna-days";
-import { bookedFeedlines } from "@/server/services/station-slots";
+import { visibleStatuses } from "@/server/services/antenna-days";
+import { slotPlanRequest } from "@/server/services/station-slots";
 import { storeFile, uploadRules } from "@/server/storage/files";
 import type { SweepUploadFields } from "@/validations/sweeps";
 
@@ -128,21 +124,9 @@ async function targetContext(actor: Actor, target: SweepTarget): Promise<TargetC
     if (!plan) throw notFound("That plan");
     return { planRequest: plan.parameters, dayId: null };
   }
-  const slot = await db().query.stationSlots.findFirst({ where: eq(stationSlots.id, target.id) });
-  if (!slot) throw notFound("That station slot");
-  const day = await findVisibleDay(actor, slot.dayId);
-  const [site, { ituRegion }] = await Promise.all([db().query.sites.findFirst({ where: eq(sites.id, day.siteId) }), getClubSettings()]);
-  if (!site) throw notFound("The day's site");
-  const request = planRequestSchema.parse(
-    planRequestForSlot(
-      { bands: slot.bands, powerW: slot.powerW, mode: slot.mode, planParams: slot.planParams, position: [slot.x, slot.y], tent: [slot.tentX, slot.tentY], feedlineRunOverrideM: slot.feedlineRunOverrideM },
-      site,
-      ituRegion as ItuRegion,
-    ),
-  );
   // A coax run booked as the slot's feedline is the line a sweep at the radio end came through.
-  const booked = (await bookedFeedlines([slot.id])).get(slot.id);
-  return { planRequest: booked ? withFeedline(request, { type: booked.cableType, lengthM: booked.lengthM }) : request, dayId: day.id };
+  const { planRequest, dayId } = await slotPlanRequest(actor, target.id);
+  return { planRequest: planRequestSchema.parse(planRequest), dayId };
 }
 
 async function accessFor(actor: Actor, context: TargetContext): Promise<SweepAccess> {

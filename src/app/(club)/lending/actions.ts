@@ -2,8 +2,8 @@
 
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
+import { bookingStateLabels } from "@/lib/lending/states";
 import { signedInAction } from "@/server/action";
-import { PublicError } from "@/server/errors";
 import { joinWaitlist, requestBooking, stepBooking, stepWaitlist, type RequestResult } from "@/server/services/lending";
 import { requestForAntennaDay } from "@/server/services/station-kits";
 import { bookingRequestSchema, bookingStepSchema, waitlistJoinSchema, waitlistStepSchema } from "@/validations/lending";
@@ -21,18 +21,11 @@ function revalidateLending(itemId: string) {
   revalidatePath("/");
 }
 
-/** A request; a clash comes back with the next free time, so the form can offer it or the waitlist. */
+/** A request; a clash comes back (through `failure`) with the next free time as `data`, so the form can offer it or the waitlist. */
 async function request(itemId: string, ask: () => Promise<RequestResult>) {
-  try {
-    const { outcome } = await ask();
-    revalidateLending(itemId);
-    return { ok: true, message: outcomeMessages[outcome] };
-  } catch (error) {
-    if (error instanceof PublicError && error.code === "conflict" && error.details?.nextFreeStart) {
-      return { ok: false, message: error.message, data: error.details as { nextFreeStart: string; nextFreeEnd: string } };
-    }
-    throw error;
-  }
+  const { outcome } = await ask();
+  revalidateLending(itemId);
+  return { ok: true, message: outcomeMessages[outcome] };
 }
 
 export const requestBookingAction = signedInAction(bookingRequestSchema, async (actor, input) => request(input.itemId, () => requestBooking(actor, input)));
@@ -43,7 +36,7 @@ export const requestForDayAction = signedInAction(dayBookingRequestSchema, async
 export const bookingStepAction = signedInAction(z.object({ bookingId: z.uuid(), step: bookingStepSchema }), async (actor, { bookingId, step }) => {
   const { booking } = await stepBooking(actor, bookingId, step);
   revalidateLending(booking.itemId);
-  return { ok: true, message: `${booking.itemLabelCode}: ${booking.state}.` };
+  return { ok: true, message: `${booking.itemLabelCode}: ${bookingStateLabels[booking.state].toLowerCase()}.` };
 });
 
 export const joinWaitlistAction = signedInAction(waitlistJoinSchema, async (actor, input) => {

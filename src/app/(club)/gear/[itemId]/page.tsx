@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ConditionBadge, StateBadge } from "@/components/gear/badges";
 import { detailSummary } from "@/components/gear/describe";
 import { FileUpload } from "@/components/gear/file-upload";
@@ -15,7 +14,7 @@ import { Card, Notice, PageHeader } from "@/components/ui/notice";
 import { approvalRuleLabels, gearKindLabels, type ShelfCondition } from "@/lib/gear/kinds";
 import { nextActionFor, type NextAction } from "@/lib/lending/next-action";
 import { formatInZone, formatRangeInZone, instantToDate } from "@/lib/time";
-import { PublicError } from "@/server/errors";
+import { loadOrNotFound } from "@/server/page-data";
 import { can, canCoSignLoan, loanNeedsCoSign } from "@/server/policy";
 import { getClubSettings } from "@/server/services/accounts";
 import { getItem, listItemFiles } from "@/server/services/gear";
@@ -40,10 +39,7 @@ export default async function GearItemPage({ params }: { params: Promise<{ itemI
   const { actor } = await requirePageViewer("gear.view");
   const { itemId } = await params;
   await settleLapsedOffers();
-  const item = await getItem(actor, itemId).catch((error: unknown) => {
-    if (error instanceof PublicError && error.status === 404) notFound();
-    throw error;
-  });
+  const item = await loadOrNotFound(itemId, (id) => getItem(actor, id));
   const [{ timeZone }, files, bookings, waitlist, history] = await Promise.all([
     getClubSettings(),
     listItemFiles(actor, itemId),

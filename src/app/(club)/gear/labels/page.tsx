@@ -4,7 +4,7 @@ import { PrintButton } from "@/components/gear/print-button";
 import { Card, PageHeader } from "@/components/ui/notice";
 import { gearKindLabels } from "@/lib/gear/kinds";
 import { paginateLabels, paperSizes, sheetLayout, SHEET_MARGIN_MM, LABEL_GAP_MM, type PaperSize } from "@/lib/gear/label-sheet";
-import { serverEnv } from "@/env";
+import { appUrl } from "@/env";
 import { listItems } from "@/server/services/gear";
 import { requirePageViewer } from "@/server/session";
 import { gearListQuerySchema } from "@/validations/gear";
@@ -23,7 +23,7 @@ export default async function LabelsPage({ searchParams }: { searchParams: Promi
   const { rows: items } = await listItems(actor, gearListQuerySchema.parse({ pageSize: 200 }));
   const selected = items.filter((item) => chosen.has(item.id));
   const layout = sheetLayout(paper);
-  const origin = serverEnv().NEXTAUTH_URL.replace(/\/$/, "");
+  const origin = appUrl();
   const labels = await Promise.all(
     selected.map(async (item) => {
       const url = `${origin}/gear/${item.id}`;

@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { ItemForm } from "@/components/gear/item-form";
 import { Card, Notice, PageHeader } from "@/components/ui/notice";
-import { PublicError } from "@/server/errors";
+import { loadOrNotFound } from "@/server/page-data";
 import { getItem } from "@/server/services/gear";
 import { requirePageViewer } from "@/server/session";
 import type { GearItemFormValues } from "@/validations/gear";
@@ -13,10 +12,7 @@ export const metadata: Metadata = { title: "Edit an item" };
 export default async function EditGearItemPage({ params }: { params: Promise<{ itemId: string }> }) {
   const { actor } = await requirePageViewer("gear.manage");
   const { itemId } = await params;
-  const item = await getItem(actor, itemId).catch((error: unknown) => {
-    if (error instanceof PublicError && error.status === 404) notFound();
-    throw error;
-  });
+  const item = await loadOrNotFound(itemId, (id) => getItem(actor, id));
   // Form inputs hold text: numbers and empty values become strings, a retired item asks for a condition.
   const values = Object.fromEntries(Object.entries(item).map(([key, value]) => [key, value === null ? "" : String(value)]));
   const defaults = { ...values, condition: item.condition === "retired" ? "" : item.condition } as GearItemFormValues;
