@@ -1,7 +1,7 @@
 // The gear shelf: items, their photos and manuals, the shelf table, CSV import and export.
 import { and, asc, count, desc, eq, ilike, inArray, isNull, or, sql, type SQL } from "drizzle-orm";
 import { db, type Executor, type Transaction } from "@/server/db";
-import { formatPath } from "@/server/api";
+import { zodProblems } from "@/server/api";
 import { gearBookings, gearHistory, gearItemFiles, gearItems, storedFiles, users, type GearItemRow } from "@/server/db/schema";
 import { badInput, badInputs, conflict, forbidden, notFound, pgConstraint, pgErrorCode, pgErrorCodes } from "@/server/errors";
 import { can, canReturnLoan, type Actor } from "@/server/policy";
@@ -144,7 +144,7 @@ export async function patchItem(actor: Actor, id: string, patch: Record<string, 
     const before = await lockItemRow(tx, id);
     const parsed = gearItemSchema.safeParse({ ...toItemDto(before), ...patch });
     if (!parsed.success) {
-      const [first, ...rest] = parsed.error.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
+      const [first, ...rest] = zodProblems(parsed.error);
       throw badInputs([first, ...rest]);
     }
     return writeItem(tx, actor, before, parsed.data);
