@@ -3,8 +3,8 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
-import { ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
-import { gearConditionLabels, gearConditions, gearKindLabels, gearKinds, type GearCondition, type GearKind } from "@/lib/gear/kinds";
+import { FilterSelect, ServerTable, filterControlClass, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
+import { gearConditionLabels, gearConditions, gearKindLabels, gearKinds } from "@/lib/gear/kinds";
 import { formatInZone } from "@/lib/time";
 import type { GearListRow } from "@/server/services/gear";
 import { ConditionBadge } from "./badges";
@@ -79,33 +79,13 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
   return (
     <div>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5" role="search" aria-label="Filter the shelf">
-        <label className="block font-bold">
-          Kind
-          <select className="mt-1 block min-h-11 w-full rounded-lg border border-slate-400 bg-white px-2" value={filterValue("kind")} onChange={(event) => setFilter("kind", event.target.value)}>
-            <option value="">All kinds</option>
-            {gearKinds.map((kind: GearKind) => (
-              <option key={kind} value={kind}>
-                {gearKindLabels[kind]}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="block font-bold">
-          Condition
-          <select className="mt-1 block min-h-11 w-full rounded-lg border border-slate-400 bg-white px-2" value={filterValue("condition")} onChange={(event) => setFilter("condition", event.target.value)}>
-            <option value="">Any condition</option>
-            {gearConditions.map((condition: GearCondition) => (
-              <option key={condition} value={condition}>
-                {gearConditionLabels[condition]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect label="Kind" anyLabel="All kinds" value={filterValue("kind")} options={gearKinds.map((kind) => ({ value: kind, label: gearKindLabels[kind] }))} onChange={(value) => setFilter("kind", value)} />
+        <FilterSelect label="Condition" anyLabel="Any condition" value={filterValue("condition")} options={gearConditions.map((condition) => ({ value: condition, label: gearConditionLabels[condition] }))} onChange={(value) => setFilter("condition", value)} />
         <label className="block font-bold">
           Free all day on
           <input
             type="date"
-            className="mt-1 block min-h-11 w-full rounded-lg border border-slate-400 bg-white px-2"
+            className={filterControlClass}
             value={availableOn}
             onChange={(event) => {
               setAvailableOn(event.target.value);
@@ -118,7 +98,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
           <input
             type="search"
             placeholder="Name, label or place"
-            className="mt-1 block min-h-11 w-full rounded-lg border border-slate-400 bg-white px-2"
+            className={filterControlClass}
             value={search}
             onChange={(event) => {
               setSearch(event.target.value);

@@ -5,7 +5,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { StateBadge } from "@/components/gear/badges";
-import { ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
+import { FilterSelect, ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
 import { gearKindLabels, gearKinds } from "@/lib/gear/kinds";
 import { bookingStateLabels, bookingStates } from "@/lib/lending/states";
 import { formatInZone } from "@/lib/time";
@@ -32,8 +32,6 @@ function buildColumns(timeZone: string) {
   ]);
 }
 
-const selectClass = "mt-1 block min-h-11 w-full rounded-lg border border-slate-400 bg-white px-2";
-
 export function LoansTable({ timeZone, borrowers }: { timeZone: string; borrowers: { id: string; name: string }[] | null }) {
   const columns = useMemo(() => buildColumns(timeZone), [timeZone]);
   const [overdueOnly, setOverdueOnly] = useState(false);
@@ -50,40 +48,10 @@ export function LoansTable({ timeZone, borrowers }: { timeZone: string; borrower
   return (
     <div>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4" role="search" aria-label="Filter the loans">
-        <label className="block font-bold">
-          State
-          <select className={selectClass} value={filterValue("state")} onChange={(event) => setFilter("state", event.target.value)}>
-            <option value="">Any state</option>
-            {bookingStates.map((state) => (
-              <option key={state} value={state}>
-                {bookingStateLabels[state]}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="block font-bold">
-          Kind
-          <select className={selectClass} value={filterValue("kind")} onChange={(event) => setFilter("kind", event.target.value)}>
-            <option value="">All kinds</option>
-            {gearKinds.map((kind) => (
-              <option key={kind} value={kind}>
-                {gearKindLabels[kind]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect label="State" anyLabel="Any state" value={filterValue("state")} options={bookingStates.map((state) => ({ value: state, label: bookingStateLabels[state] }))} onChange={(value) => setFilter("state", value)} />
+        <FilterSelect label="Kind" anyLabel="All kinds" value={filterValue("kind")} options={gearKinds.map((kind) => ({ value: kind, label: gearKindLabels[kind] }))} onChange={(value) => setFilter("kind", value)} />
         {borrowers && (
-          <label className="block font-bold">
-            Borrower
-            <select className={selectClass} value={filterValue("borrower")} onChange={(event) => setFilter("borrower", event.target.value)}>
-              <option value="">Everyone</option>
-              {borrowers.map((person) => (
-                <option key={person.id} value={person.id}>
-                  {person.name}
-                </option>
-              ))}
-            </select>
-          </label>
+          <FilterSelect label="Borrower" anyLabel="Everyone" value={filterValue("borrower")} options={borrowers.map((person) => ({ value: person.id, label: person.name }))} onChange={(value) => setFilter("borrower", value)} />
         )}
         <label className="flex min-h-11 items-center gap-2 self-end font-bold">
           <input

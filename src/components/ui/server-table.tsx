@@ -166,3 +166,23 @@ export function ServerTable<Row extends { id: string }>({ table, result, paginat
     </>
   );
 }
+
+/** The look of a server-side table's filter controls. */
+export const filterControlClass = "mt-1 block min-h-11 w-full rounded-lg border border-slate-400 bg-white px-2";
+
+/** One filter of a server-side table: the empty first option means "no filter". */
+export function FilterSelect(props: { label: string; anyLabel: string; value: string; options: { value: string; label: string }[]; onChange: (value: string) => void }) {
+  return (
+    <label className="block font-bold">
+      {props.label}
+      <select className={filterControlClass} value={props.value} onChange={(event) => props.onChange(event.target.value)}>
+        <option value="">{props.anyLabel}</option>
+        {props.options.map((option) => (
+          <option key={option.value} value={option.value}>
+            {option.label}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
