@@ -42,7 +42,8 @@ test("a newcomer joins a full session's waitlist, is promoted when a place frees
   await expect(page.getByRole("heading", { name: "Cut sheet" })).toBeVisible();
   await expect(page.getByRole("link", { name: "Request it from the lending desk" }).first()).toHaveAttribute("href", "/lending");
   await page.getByRole("button", { name: "Join the waitlist" }).click();
-  await expect(page.getByText("You are number 1 on the waitlist.")).toBeVisible();
+  // exact: the action's own confirmation also says "you are number 1 on the waitlist." while it shows.
+  await expect(page.getByText("You are number 1 on the waitlist.", { exact: true })).toBeVisible();
 
   expect((await member.request.delete(`/api/build-sessions/${sessionId}/signup`)).status()).toBe(200);
   await page.reload();

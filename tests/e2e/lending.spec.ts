@@ -36,7 +36,8 @@ test("a member borrows an analyser for the next antenna day: request, approval, 
   await member.getByRole("button", { name: "Request it" }).click();
   // The page now shows the request waiting for a steward.
   await expect(member.getByTestId("next-action")).toHaveAttribute("data-action", "awaiting");
-  await expect(member.getByText("A steward will approve or decline it.")).toBeVisible();
+  // exact: the form's confirmation also says "a steward will approve or decline it." while it shows.
+  await expect(member.getByText("A steward will approve or decline it.", { exact: true })).toBeVisible();
 
   const steward = await pageAs(browser, "steward");
   await steward.goto("/lending");
