@@ -12,7 +12,16 @@ set -e
 ensure_node
 ensure_debian_packages psql:postgresql chromium:chromium nec2c:nec2c
 ensure_node_modules
+# The machine is left as found: a test cluster this run starts is stopped at the end, so it
+# never holds the port against the next run from another clone.
+cluster_was_running=0
+bash scripts/db.sh status test >/dev/null 2>&1 && cluster_was_running=1
 bash scripts/db.sh start test
+clean_up() {
+  stop_mail_services e2e
+  [ "$cluster_was_running" = 1 ] || bash scripts/db.sh stop test >/dev/null
+}
+trap clean_up EXIT
 
 reports=".data/test-reports"
 rm -rf "$reports"; mkdir -p "$reports"
@@ -50,9 +59,7 @@ step "production build" env NODE_ENV=production bash -c 'source scripts/lib/setu
 # The browser tests read the mail the app sends: the local mail server and the worker run
 # against the e2e database while they do.
 step "mail services" env "${e2e_env[@]}" bash -c 'source scripts/lib/ports.sh && source scripts/lib/background.sh && start_mail_services e2e "$GUYLINE_SMTP_TEST_PORT"'
-trap 'stop_mail_services e2e' EXIT
 step "browser tests" env "${e2e_env[@]}" PLAYWRIGHT_JSON_OUTPUT_NAME="$reports/e2e.json" npx playwright test --reporter=list,json
-stop_mail_services e2e
 
 echo
 [ ${#failed_steps[@]} -gt 0 ] && echo "Failed steps: ${failed_steps[*]}"
