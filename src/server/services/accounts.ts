@@ -3,6 +3,7 @@
 import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { and, asc, eq, gt, isNull } from "drizzle-orm";
+import { cache } from "react";
 import { db } from "@/server/db";
 import { clubSettings, invitations, users, type UserRow } from "@/server/db/schema";
 import { PublicError, badInput, forbidden, notFound, pgErrorCode, pgErrorCodes } from "@/server/errors";
@@ -257,11 +258,12 @@ export async function createClub(input: {
   });
 }
 
-export async function getClubSettings() {
+/** The club's settings, read once per page render (React's request memoisation; outside a render each call reads afresh). */
+export const getClubSettings = cache(async () => {
   const settings = await db().query.clubSettings.findFirst();
   if (!settings) throw new Error("The club has no settings yet: run the seed or the first-run set-up.");
   return settings;
-}
+});
 
 export async function updateClubSettings(actor: Actor, input: Omit<typeof clubSettings.$inferInsert, "id" | "updatedAt">) {
   if (!can(actor, "club.configure")) throw forbidden();
