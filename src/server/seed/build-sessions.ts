@@ -6,7 +6,7 @@ import { Temporal } from "temporal-polyfill";
 import { planRequestSchema } from "@/lib/antenna";
 import { wallTimeToInstant } from "@/lib/time";
 import type { Transaction } from "@/server/db";
-import { buildSessionMentors, buildSessionSignups, buildSessions, clubSettings } from "@/server/db/schema";
+import { buildSessionMentors, buildSessionSignups, buildSessions } from "@/server/db/schema";
 import { demoUserId } from "./people";
 
 interface DemoSession {
@@ -71,8 +71,7 @@ const demoSessions: DemoSession[] = [
   },
 ];
 
-export async function seedBuildSessions(tx: Transaction): Promise<void> {
-  const [club] = await tx.select({ timeZone: clubSettings.timeZone }).from(clubSettings);
+export async function seedBuildSessions(tx: Transaction, club: { timeZone: string }): Promise<void> {
   const today = Temporal.Now.plainDateISO(club.timeZone);
   for (const demo of demoSessions) {
     const existing = await tx.query.buildSessions.findFirst({ where: eq(buildSessions.title, demo.title) });

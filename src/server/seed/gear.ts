@@ -2,6 +2,8 @@
 // around the time the seed runs (some overdue, one with a waitlist, a newcomer's analyser request
 // waiting for a mentor's co-sign). Runs once: it does nothing when the shelf has items.
 import { eq } from "drizzle-orm";
+import { Temporal } from "temporal-polyfill";
+import { wallTimeToInstant } from "@/lib/time";
 import type { Transaction } from "@/server/db";
 import { gearBookings, gearHistory, gearItems, gearWaitlist } from "@/server/db/schema";
 import { defaultApprovalRule } from "@/lib/gear/kinds";
@@ -74,12 +76,14 @@ export const demoItems: ItemSeed[] = [
 
 const HOUR = 3_600_000;
 
+/** Club days from the seed's date and a club wall time, so the demo's times read like times people pick. */
+type ClubTime = [days: number, time: string];
+
 interface BookingSeed {
   item: string;
   borrower: string;
-  /** Hours from the seed's run. */
-  from: number;
-  to: number;
+  from: ClubTime;
+  to: ClubTime;
   state: BookingState;
   note?: string;
   coSignRequired?: boolean;
@@ -92,26 +96,28 @@ interface BookingSeed {
 const steward = "steward@demo.test";
 
 const demoBookings: BookingSeed[] = [
-  { item: "AN-02", borrower: "lena@demo.test", from: 5 * 24, to: 6 * 24, state: "requested", note: "Tuning the club's 40 m inverted-V." },
-  { item: "AN-01", borrower: "newcomer@demo.test", from: 8 * 24, to: 8 * 24 + 8, state: "requested", coSignRequired: true, note: "My first dipole, at the build session." },
-  { item: "CX-03", borrower: "priya@demo.test", from: 6, to: 30, state: "approved" },
-  { item: "MA-01", borrower: "member@demo.test", from: 10 * 24, to: 11 * 24, state: "approved", note: "Portable station on the hill." },
-  { item: "CX-05", borrower: "rosa@demo.test", from: 3 * 24, to: 3 * 24 + 8, state: "approved" },
-  { item: "CX-02", borrower: "member@demo.test", from: -24, to: 24, state: "out" },
-  { item: "BU-03", borrower: "milo@demo.test", from: -5 * 24, to: -3 * 24, state: "out" },
-  { item: "TU-01", borrower: "otto@demo.test", from: -3 * 24, to: -24, state: "out" },
-  { item: "RA-01", borrower: "kofi@demo.test", from: -2 * 24, to: 4 * 24, state: "out" },
-  { item: "CX-04", borrower: "juno@demo.test", from: -9 * 24, to: -7 * 24, state: "returned", returnCondition: "worn", damageNotes: "Boot split at the radio end; still fine electrically." },
-  { item: "MA-02", borrower: "nadia@demo.test", from: -20 * 24, to: -18 * 24, state: "returned", returnCondition: "good" },
-  { item: "RA-02", borrower: "sami@demo.test", from: 2 * 24, to: 4 * 24, state: "declined", declineReason: "Needed for the club station that weekend." },
-  { item: "PW-01", borrower: "tove@demo.test", from: 12 * 24, to: 13 * 24, state: "cancelled", note: "Plans changed." },
-  { item: "OT-01", borrower: "quentin@demo.test", from: -30 * 24, to: -29 * 24, state: "lost", note: "One weight stuck high in an oak." },
+  { item: "AN-02", borrower: "lena@demo.test", from: [5, "09:00"], to: [6, "18:00"], state: "requested", note: "Tuning the club's 40 m inverted-V." },
+  { item: "AN-01", borrower: "newcomer@demo.test", from: [8, "09:00"], to: [8, "17:00"], state: "requested", coSignRequired: true, note: "My first dipole, at the build session." },
+  { item: "CX-03", borrower: "priya@demo.test", from: [1, "09:00"], to: [2, "12:00"], state: "approved" },
+  { item: "MA-01", borrower: "member@demo.test", from: [10, "09:00"], to: [11, "18:00"], state: "approved", note: "Portable station on the hill." },
+  { item: "CX-05", borrower: "rosa@demo.test", from: [3, "09:00"], to: [3, "17:00"], state: "approved" },
+  { item: "CX-02", borrower: "member@demo.test", from: [-1, "10:00"], to: [1, "18:00"], state: "out" },
+  { item: "BU-03", borrower: "milo@demo.test", from: [-5, "10:00"], to: [-3, "18:00"], state: "out" },
+  { item: "TU-01", borrower: "otto@demo.test", from: [-3, "10:00"], to: [-1, "18:00"], state: "out" },
+  { item: "RA-01", borrower: "kofi@demo.test", from: [-2, "10:00"], to: [4, "18:00"], state: "out" },
+  { item: "CX-04", borrower: "juno@demo.test", from: [-9, "10:00"], to: [-7, "18:00"], state: "returned", returnCondition: "worn", damageNotes: "Boot split at the radio end; still fine electrically." },
+  { item: "MA-02", borrower: "nadia@demo.test", from: [-20, "10:00"], to: [-18, "18:00"], state: "returned", returnCondition: "good" },
+  { item: "RA-02", borrower: "sami@demo.test", from: [2, "09:00"], to: [4, "18:00"], state: "declined", declineReason: "Needed for the club station that weekend." },
+  { item: "PW-01", borrower: "tove@demo.test", from: [12, "09:00"], to: [13, "18:00"], state: "cancelled", note: "Plans changed." },
+  { item: "OT-01", borrower: "quentin@demo.test", from: [-30, "10:00"], to: [-29, "18:00"], state: "lost", note: "One weight stuck high in an oak." },
 ];
 
-export async function seedGear(tx: Transaction): Promise<void> {
+export async function seedGear(tx: Transaction, club: { timeZone: string }): Promise<void> {
   const existing = await tx.select({ id: gearItems.id }).from(gearItems).limit(1);
   if (existing.length > 0) return;
-  // Whole hours, so the demo's times read like times people would pick.
+  const today = Temporal.Now.plainDateISO(club.timeZone);
+  const clubTime = ([days, time]: ClubTime) => wallTimeToInstant(`${today.add({ days })}T${time}`, club.timeZone);
+  // Whole hours, so the history's request and approval times read like times people act.
   const now = Math.floor(Date.now() / HOUR) * HOUR;
   const inserted = await tx
     .insert(gearItems)
@@ -131,8 +137,8 @@ export async function seedGear(tx: Transaction): Promise<void> {
 
   for (const seed of demoBookings) {
     const borrowerId = await person(seed.borrower);
-    const startsAt = new Date(now + seed.from * HOUR);
-    const endsAt = new Date(now + seed.to * HOUR);
+    const startsAt = clubTime(seed.from);
+    const endsAt = clubTime(seed.to);
     const requestedAt = new Date(Math.min(now, startsAt.getTime()) - 3 * 24 * HOUR);
     const decidedAt = new Date(requestedAt.getTime() + 4 * HOUR);
     const reached = (state: BookingState) => pathTo(seed.state).includes(state);
@@ -180,8 +186,8 @@ export async function seedGear(tx: Transaction): Promise<void> {
   await tx.insert(gearWaitlist).values({
     itemId: itemId.get("CX-05")!,
     userId: nadia,
-    startsAt: new Date(now + (3 * 24 + 2) * HOUR),
-    endsAt: new Date(now + (3 * 24 + 6) * HOUR),
+    startsAt: clubTime([3, "11:00"]),
+    endsAt: clubTime([3, "15:00"]),
     createdAt: new Date(now - 24 * HOUR),
   });
   await tx.insert(gearHistory).values({ itemId: itemId.get("CX-05")!, actorId: nadia, event: "waitlist-joined", toState: "waiting", at: new Date(now - 24 * HOUR) });

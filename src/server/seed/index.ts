@@ -25,8 +25,8 @@ export async function seedDemo(): Promise<void> {
     const settings = await tx.query.clubSettings.findFirst();
     await seedAntennaDays(tx, { timeZone: settings!.timeZone, ituRegion: settings!.ituRegion });
     await seedPlanLibrary(tx, { ituRegion: settings!.ituRegion });
-    await seedBuildSessions(tx);
-    await seedGear(tx);
+    await seedBuildSessions(tx, { timeZone: settings!.timeZone });
+    await seedGear(tx, { timeZone: settings!.timeZone });
     await seedStationKits(tx);
     await seedSweeps(tx, { timeZone: settings!.timeZone, ituRegion: settings!.ituRegion });
   });
