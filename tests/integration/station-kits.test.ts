@@ -4,12 +4,12 @@
 // the database keeping one booking per coax run and time, and one feedline per slot, under
 // concurrent keepers.
 // Source: Guyline issue 5 ("Gear shelf and lending desk"), item 4 "Station kits" and its "Tests".
-import { eq } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { plan } from "@/lib/antenna/plan";
 import { runFigures, withFeedline } from "@/lib/station-kits/run-figures";
 import { db } from "@/server/db";
-import { gearBookings } from "@/server/db/schema";
+import { gearBookings, gearItems } from "@/server/db/schema";
 import { PublicError } from "@/server/errors";
 import { createDay, updateDay } from "@/server/services/antenna-days";
 import { retireItem } from "@/server/services/gear";
@@ -77,6 +77,8 @@ describe("coax runs suggested for a station slot", () => {
     const { slot, day, runM } = await dayWithSlot(90);
     expect(runM).toBeCloseTo(111, 6);
     const steward = await testSteward();
+    // The shelf holds only this test's runs, also on a test database used before.
+    await db().update(gearItems).set({ condition: "retired", retiredAt: new Date() }).where(and(eq(gearItems.kind, "coax"), isNull(gearItems.retiredAt)));
     const add = (cableType: "rg213" | "rg8x" | "rg6", lengthM: number, condition: "good" | "needs_repair" = "good") => addCoaxRun({ cableType, lengthM, condition });
     const best = await add("rg213", 113);
     const longer = await add("rg213", 131);
