@@ -25,6 +25,8 @@ test("a person who forgot their password gets a link by e-mail, chooses a new on
   const visitor = await browser.newPage();
   await visitor.goto("/sign-in");
   await visitor.getByRole("link", { name: "Forgot your password?" }).click();
+  // The sign-in page has an "E-mail" field too: wait for the new page before filling.
+  await expect(visitor.getByRole("heading", { level: 1, name: "Forgot your password?" })).toBeVisible();
   await visitor.getByLabel("E-mail").fill(email);
   await visitor.getByRole("button", { name: "Send me a link" }).click();
   await expect(visitor.getByText(/a link to choose a new password is on its way/)).toBeVisible();
