@@ -1,7 +1,9 @@
 // The lending desk in the browser: a member borrows an analyser and returns it, the history
-// shows every step; the QR label sheet links to item pages that offer each role its next action.
+// shows every step; the QR label sheet links to item pages that offer each role its next action;
+// stewards narrow the loans to the overdue ones.
 // Source: Guyline issue 5, "Tests" ("Browser: a member requests an analyser ..., the steward
-// approves and hands it out, the member returns it with a note, and the history shows all of it").
+// approves and hands it out, the member returns it with a note, and the history shows all of it")
+// and item 2 ("Overdue loans are marked and listed for stewards").
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { signIn, type DemoRole } from "./fixtures";
 
@@ -101,4 +103,18 @@ test("the QR label sheet links to item pages that offer each role the right next
   await newcomer.goto(analyserLink);
   await expect(newcomer.getByTestId("next-action")).toHaveAttribute("data-action", "request");
   await expect(newcomer.getByText(/borrow an analyser with a mentor's co-sign/)).toBeVisible();
+});
+
+test("a steward narrows all loans to the overdue ones", async ({ page }) => {
+  await signIn(page, "steward");
+  await page.goto("/lending");
+  const loans = page.getByRole("table").filter({ has: page.getByRole("columnheader", { name: "Borrower" }) });
+  const rows = loans.getByRole("row").filter({ has: page.getByRole("cell") });
+  await expect(rows.first()).toBeVisible();
+  await page.getByRole("search", { name: "Filter the loans" }).getByLabel("Overdue only").check();
+  // The demo seed has BU-03 and TU-01 out past their end, and CX-02 out until tomorrow evening.
+  await expect(loans.getByRole("link", { name: /^BU-03 / })).toBeVisible();
+  await expect(loans.getByRole("link", { name: /^TU-01 / })).toBeVisible();
+  await expect(loans.getByRole("link", { name: /^CX-02 / })).toHaveCount(0);
+  for (const row of await rows.all()) await expect(row.getByText("Overdue", { exact: true })).toBeVisible();
 });

@@ -3,7 +3,7 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useEffect, useMemo, useState } from "react";
-import { FilterSelect, ServerTable, filterControlClass, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
+import { FilterCheckbox, FilterSelect, ServerTable, filterControlClass, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
 import { gearConditionLabels, gearConditions, gearKindLabels, gearKinds } from "@/lib/gear/kinds";
 import { formatInZone } from "@/lib/time";
 import type { GearListRow } from "@/server/services/gear";
@@ -106,18 +106,14 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
             }}
           />
         </label>
-        <label className="flex min-h-11 items-center gap-2 self-end font-bold">
-          <input
-            type="checkbox"
-            className="size-5 accent-copper-700"
-            checked={includeRetired}
-            onChange={(event) => {
-              setIncludeRetired(event.target.checked);
-              firstPage();
-            }}
-          />
-          Show retired items
-        </label>
+        <FilterCheckbox
+          label="Show retired items"
+          checked={includeRetired}
+          onChange={(checked) => {
+            setIncludeRetired(checked);
+            firstPage();
+          }}
+        />
       </div>
       <p className="mt-3 text-sm">
         <a href={csvHref} download>

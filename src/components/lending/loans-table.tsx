@@ -5,7 +5,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { StateBadge } from "@/components/gear/badges";
-import { FilterSelect, ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
+import { FilterCheckbox, FilterSelect, ServerTable, serverTableFeatures, useServerTable } from "@/components/ui/server-table";
 import { gearKindLabels, gearKinds } from "@/lib/gear/kinds";
 import { bookingStateLabels, bookingStates } from "@/lib/lending/states";
 import { formatInZone } from "@/lib/time";
@@ -53,18 +53,14 @@ export function LoansTable({ timeZone, borrowers }: { timeZone: string; borrower
         {borrowers && (
           <FilterSelect label="Borrower" anyLabel="Everyone" value={filterValue("borrower")} options={borrowers.map((person) => ({ value: person.id, label: person.name }))} onChange={(value) => setFilter("borrower", value)} />
         )}
-        <label className="flex min-h-11 items-center gap-2 self-end font-bold">
-          <input
-            type="checkbox"
-            className="size-5 accent-copper-700"
-            checked={overdueOnly}
-            onChange={(event) => {
-              setOverdueOnly(event.target.checked);
-              firstPage();
-            }}
-          />
-          Overdue only
-        </label>
+        <FilterCheckbox
+          label="Overdue only"
+          checked={overdueOnly}
+          onChange={(checked) => {
+            setOverdueOnly(checked);
+            firstPage();
+          }}
+        />
       </div>
       <p className="mt-3 text-sm">
         <a href={csvHref} download>

@@ -186,3 +186,13 @@ export function FilterSelect(props: { label: string; anyLabel: string; value: st
     </label>
   );
 }
+
+/** A yes/no filter beside the selects, e.g. "Overdue only". */
+export function FilterCheckbox(props: { label: string; checked: boolean; onChange: (checked: boolean) => void }) {
+  return (
+    <label className="flex min-h-11 items-center gap-2 self-end font-bold">
+      <input type="checkbox" className="size-5 accent-copper-700" checked={props.checked} onChange={(event) => props.onChange(event.target.checked)} />
+      {props.label}
+    </label>
+  );
+}
