@@ -60,6 +60,12 @@ test("a member sees the shelf without the keepers' controls", async ({ page }) =
   await page.goto("/gear");
   await expect(page.getByTestId("gear-row-AN-01")).toBeVisible();
   await expect(page.getByRole("link", { name: "Add an item" })).toHaveCount(0);
+  // A filter chosen on a later page shows the first page of what it matches.
+  await page.getByRole("button", { name: "Next page" }).click();
+  await expect(page.getByText(/^Page 2 of /)).toBeVisible();
+  await page.getByRole("search", { name: "Filter the shelf" }).getByLabel("Kind").selectOption({ label: "Antenna analyser" });
+  await expect(page.getByText(/^Page 1 of 1 /)).toBeVisible();
+  await expect(page.getByTestId("gear-row-AN-01")).toBeVisible();
   expect((await page.goto("/gear/new"))?.status()).toBe(403);
   expect((await page.goto("/gear/labels"))?.status()).toBe(403);
 });

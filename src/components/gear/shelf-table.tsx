@@ -66,7 +66,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
   const [search, setSearch] = useState("");
   const query = useSettledValue(search.trim(), SEARCH_DELAY_MS);
   const [includeRetired, setIncludeRetired] = useState(false);
-  const { table, result, pagination, filterValue, setFilter, firstPage, csvHref } = useServerTable({
+  const { table, result, pagination, filterValue, setFilter, csvHref } = useServerTable({
     queryKey: "gear",
     endpoint: "/api/gear",
     columns,
@@ -87,10 +87,7 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
             type="date"
             className={filterControlClass}
             value={availableOn}
-            onChange={(event) => {
-              setAvailableOn(event.target.value);
-              firstPage();
-            }}
+            onChange={(event) => setAvailableOn(event.target.value)}
           />
         </label>
         <label className="block font-bold">
@@ -100,19 +97,13 @@ export function ShelfTable({ timeZone }: { timeZone: string }) {
             placeholder="Name, label or place"
             className={filterControlClass}
             value={search}
-            onChange={(event) => {
-              setSearch(event.target.value);
-              firstPage();
-            }}
+            onChange={(event) => setSearch(event.target.value)}
           />
         </label>
         <FilterCheckbox
           label="Show retired items"
           checked={includeRetired}
-          onChange={(checked) => {
-            setIncludeRetired(checked);
-            firstPage();
-          }}
+          onChange={setIncludeRetired}
         />
       </div>
       <p className="mt-3 text-sm">

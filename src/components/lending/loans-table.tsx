@@ -35,7 +35,7 @@ function buildColumns(timeZone: string) {
 export function LoansTable({ timeZone, borrowers }: { timeZone: string; borrowers: { id: string; name: string }[] | null }) {
   const columns = useMemo(() => buildColumns(timeZone), [timeZone]);
   const [overdueOnly, setOverdueOnly] = useState(false);
-  const { table, result, pagination, filterValue, setFilter, firstPage, csvHref } = useServerTable({
+  const { table, result, pagination, filterValue, setFilter, csvHref } = useServerTable({
     queryKey: "bookings",
     endpoint: "/api/bookings",
     columns,
@@ -56,10 +56,7 @@ export function LoansTable({ timeZone, borrowers }: { timeZone: string; borrower
         <FilterCheckbox
           label="Overdue only"
           checked={overdueOnly}
-          onChange={(checked) => {
-            setOverdueOnly(checked);
-            firstPage();
-          }}
+          onChange={setOverdueOnly}
         />
       </div>
       <p className="mt-3 text-sm">

@@ -50,12 +50,8 @@ export function useServerTable<Row extends { id: string }>({ queryKey, endpoint,
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const [pagination, setPagination] = useState<PaginationState>({ pageIndex: 0, pageSize: 20 });
 
-  const firstPage = () => setPagination((page) => ({ ...page, pageIndex: 0 }));
   const filterValue = (id: string) => (columnFilters.find((filter) => filter.id === id)?.value as string | undefined) ?? "";
-  const setFilter = (id: string, value: string) => {
-    setColumnFilters((filters) => [...filters.filter((filter) => filter.id !== id), ...(value ? [{ id, value }] : [])]);
-    firstPage();
-  };
+  const setFilter = (id: string, value: string) => setColumnFilters((filters) => [...filters.filter((filter) => filter.id !== id), ...(value ? [{ id, value }] : [])]);
 
   const filters = Object.fromEntries(Object.entries(filterParams).map(([id, param]) => [param, filterValue(id)]));
   const params = {
@@ -64,6 +60,15 @@ export function useServerTable<Row extends { id: string }>({ queryKey, endpoint,
     ...filters,
     ...extraParams,
   };
+  // A new sort, filter or page control (once its value settles) starts again at the first page.
+  // Adjusted while rendering, as React advises for state that follows other values, so the old
+  // page of the new rows is never fetched.
+  const paramsKey = JSON.stringify(params);
+  const [pagedParamsKey, setPagedParamsKey] = useState(paramsKey);
+  if (pagedParamsKey !== paramsKey) {
+    setPagedParamsKey(paramsKey);
+    setPagination((page) => ({ ...page, pageIndex: 0 }));
+  }
   const pageParams = { page: pagination.pageIndex + 1, pageSize: pagination.pageSize };
 
   const result = useQuery({
@@ -84,10 +89,7 @@ export function useServerTable<Row extends { id: string }>({ queryKey, endpoint,
     rowCount: result.data?.rowCount ?? 0,
     getRowId: (row) => row.id,
     state: { sorting, columnFilters, pagination },
-    onSortingChange: (updater) => {
-      setSorting(updater);
-      firstPage();
-    },
+    onSortingChange: setSorting,
     onColumnFiltersChange: setColumnFilters,
     onPaginationChange: setPagination,
     manualSorting: true,
@@ -102,7 +104,6 @@ export function useServerTable<Row extends { id: string }>({ queryKey, endpoint,
     pagination,
     filterValue,
     setFilter,
-    firstPage,
     /** The same rows, every page, as CSV. */
     csvHref: `${endpoint}?${queryString({ ...params, format: "csv" })}`,
   };
