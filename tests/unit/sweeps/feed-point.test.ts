@@ -93,16 +93,21 @@ describe("de-embedding a radio-end reading through a lossy line", () => {
   });
 });
 
+// Source: reference-data.md §4, table "SWR at the input" [C], |Γin| = |ΓL|·10^(−A/10)
+// (ARRL Antenna Book (recent editions), Transmission Lines chapter, from memory):
+// [SWR at the load, matched loss in dB, SWR at the input].
+const SWR_AT_THE_INPUT: [number, number, number][] = [
+  [2, 0.5, 1.845],
+  [3, 1.0, 2.318],
+  [5, 1.0, 3.251],
+  [3, 2.0, 1.922],
+  [10, 3.0, 2.39],
+  [10, 0.2, 8.147],
+];
+
 describe("SWR alone through a lossy line", () => {
-  it.each([
-    [1.845, 0.5, 2],
-    [2.318, 1.0, 3],
-    [3.251, 1.0, 5],
-    [1.922, 2.0, 3],
-    [2.39, 3.0, 10],
-    [8.147, 0.2, 10],
-  ])("estimates the load's SWR from %f at the input and %f dB matched loss: %f", (input, lossDb, load) => {
-    // Source: reference-data.md §4, table "SWR at the input" [C], |Γin| = |ΓL|·10^(−A/10) (ARRL Antenna Book, Transmission Lines). Inverted.
+  it.each(SWR_AT_THE_INPUT)("estimates a load's SWR of %f from %f dB matched loss and the input's %f", (load, lossDb, input) => {
+    // The table inverted.
     expect(loadSwrFromInputSwr(input, lossDb)).toBeCloseTo(load, load >= 10 ? 0 : 2);
   });
 
@@ -117,15 +122,7 @@ describe("SWR alone through a lossy line", () => {
     expect(views.explanation.join(" ")).toMatch(/At 1 frequency the SWR at the radio is higher than any load could give/);
   });
 
-  it.each([
-    [2, 0.5, 1.845],
-    [3, 1.0, 2.318],
-    [5, 1.0, 3.251],
-    [3, 2.0, 1.922],
-    [10, 3.0, 2.39],
-    [10, 0.2, 8.147],
-  ])("carries a feed-point SWR of %f through %f dB of matched loss to %f at the radio", (load, lossDb, input) => {
-    // Source: reference-data.md §4, table "SWR at the input" [C], |Γin| = |ΓL|·10^(−A/10) (ARRL Antenna Book (recent editions), Transmission Lines chapter, from memory).
+  it.each(SWR_AT_THE_INPUT)("carries a feed-point SWR of %f through %f dB of matched loss to %f at the radio", (load, lossDb, input) => {
     const { chain, mhz } = quarterWaveLine(lossDb);
     const rows = [-0.2, -0.1, 0, 0.1, 0.2].map((offset) => `${mhz + offset},${load}`);
     const views = sweepViews(readSweepText(["MHz,SWR", ...rows].join("\n")).points, "feed-point", chain);
